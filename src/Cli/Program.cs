@@ -1,0 +1,3 @@
+using Bramble.Cli;
+
+return Bramble.Cli.Entry.Run(args);

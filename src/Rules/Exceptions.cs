@@ -1,0 +1,19 @@
+namespace Bramble.Rules;
+
+/// <summary>Bad position text: the text, the 0-based column of the fault and what was expected there.</summary>
+public sealed class PositionSyntaxException(string text, int column, string expected)
+    : FormatException($"column {column + 1}: expected {expected}")
+{
+    public string Text { get; } = text;
+    public int Column { get; } = column;
+    public string Expected { get; } = expected;
+
+    /// <summary>The text with a caret under the offending character, for people.</summary>
+    public string Pointer => $"{Text}\n{new string(' ', Math.Min(Column, Text.Length))}^ expected {Expected}";
+}
+
+/// <summary>A move that does not parse or is not legal in the position for that side.</summary>
+public sealed class IllegalMoveException(string message) : InvalidOperationException(message);
+
+/// <summary>A local-value or search computation ran past its time or node budget.</summary>
+public sealed class BudgetExceededException(string message) : Exception(message);

@@ -1,0 +1,15 @@
+namespace Bramble.Search;
+
+/// <summary>Creates players by their SPEC.md names.</summary>
+public static class Players
+{
+    public static readonly IReadOnlyList<string> Names = ["random"];
+
+    /// <param name="name">perfect, alphabeta, hotstrat, thermostrat, sentestrat or random.</param>
+    /// <param name="seed">Seed for players that use randomness.</param>
+    public static IPlayer Create(string name, int seed = 1) => name.ToLowerInvariant() switch
+    {
+        "random" => new RandomPlayer(seed),
+        _ => throw new ArgumentException($"unknown strategy '{name}'; known: {string.Join(", ", Names)}"),
+    };
+}

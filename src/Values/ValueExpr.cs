@@ -1,0 +1,26 @@
+namespace Bramble.Values;
+
+/// <summary>
+/// A value expression as written (before simplification): what the Forms ruleset keeps per term,
+/// so moves can name options "as written". <see cref="GameStore.Evaluate"/> turns it into a
+/// canonical game.
+/// </summary>
+public abstract record ValueExpr;
+
+/// <summary>A number such as 3, -2 or 3/8.</summary>
+public sealed record NumberExpr(Dyadic Value) : ValueExpr;
+
+/// <summary>x + n·↑ + *m written as one token group: *, *2, ↑, ⇑*, 3↓*2, 1*, up*.</summary>
+public sealed record UpStarExpr(Dyadic X, int Ups, int Star) : ValueExpr;
+
+/// <summary>±x = {x | -x}.</summary>
+public sealed record SwitchExpr(Dyadic X) : ValueExpr;
+
+/// <summary>{L | R} with the options as written.</summary>
+public sealed record OptionsExpr(IReadOnlyList<ValueExpr> Left, IReadOnlyList<ValueExpr> Right) : ValueExpr;
+
+/// <summary>A sum a + b + ... (subtraction is a sum with a negated term).</summary>
+public sealed record SumExpr(IReadOnlyList<ValueExpr> Terms) : ValueExpr;
+
+/// <summary>-G.</summary>
+public sealed record NegateExpr(ValueExpr Inner) : ValueExpr;
