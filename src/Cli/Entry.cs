@@ -22,6 +22,7 @@ public static class Entry
         // One line per verb; each verb lives in Verbs/<Name>Verb.cs.
         root.Subcommands.Add(ValueVerb.Build());
         root.Subcommands.Add(DrawVerb.Build());
+        root.Subcommands.Add(PlayVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
 
         var parse = root.Parse(args);
