@@ -21,6 +21,7 @@ public static class Entry
         root.Options.Add(VerboseOption);
         // One line per verb; each verb lives in Verbs/<Name>Verb.cs.
         root.Subcommands.Add(ValueVerb.Build());
+        root.Subcommands.Add(DrawVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
 
         var parse = root.Parse(args);
