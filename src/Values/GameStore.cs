@@ -317,7 +317,6 @@ public sealed partial class GameStore
         if (cached >= 0) return new Game(cached);
         Game result;
         if (_number[g.Id] is { } x) result = Number(-x);
-        else if (_tag[g.Id] is { } t) result = UpStar(-t.X, -t.N, t.M);
         else
         {
             // The negative of a canonical form is canonical: swap and negate, no simplification needed.
@@ -333,6 +332,12 @@ public sealed partial class GameStore
                 InferNimber(id, nl, nr);
             }
             result = new Game(id);
+            if (_tag[g.Id] is { } t && _tag[id] is null)
+            {
+                var negated = new UpStarTag(-t.X, -t.N, t.M);
+                _tag[id] = negated;
+                _upStars.TryAdd(negated, id);
+            }
         }
         _negative[g.Id] = result.Id;
         _negative[result.Id] = g.Id;

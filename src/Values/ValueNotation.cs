@@ -1,0 +1,341 @@
+using System.Text;
+
+namespace Bramble.Values;
+
+/// <summary>
+/// The value notation of SPEC.md §2, in: numbers, nimbers, ups and downs (symbols or the ASCII
+/// words), ±x, braces with the multi-bar shorthand, sums, differences and parentheses.
+/// </summary>
+public static class ValueNotation
+{
+    /// <summary>Parses a value expression; throws <see cref="ValueSyntaxException"/> with the column and what was expected.</summary>
+    public static ValueExpr Parse(string text)
+    {
+        var terms = ParseTerms(text);
+        return terms.Count == 1 ? terms[0].Term : new SumExpr(terms.Select(t => t.Term).ToArray());
+    }
+
+    /// <summary>Splits a top-level sum into its terms as written (a subtracted term comes back negated), with 0-based start columns.</summary>
+    public static IReadOnlyList<(ValueExpr Term, int Column)> ParseTerms(string text)
+    {
+        var p = new Parser(text);
+        var terms = p.ParseSum(text.Length);
+        p.SkipSpace(text.Length);
+        if (p.Pos < text.Length) throw p.Fail("'+', '-' or the end of the value");
+        return terms;
+    }
+
+    private sealed class Parser(string text)
+    {
+        public int Pos;
+
+        public ValueSyntaxException Fail(string expected) => new(text, Pos, expected);
+
+        public void SkipSpace(int end)
+        {
+            while (Pos < end && char.IsWhiteSpace(text[Pos])) Pos++;
+        }
+
+        private bool Peek(int end, string s) => Pos + s.Length <= end && string.CompareOrdinal(text, Pos, s, 0, s.Length) == 0;
+
+        public List<(ValueExpr, int)> ParseSum(int end)
+        {
+            var terms = new List<(ValueExpr, int)>();
+            SkipSpace(end);
+            if (Pos >= end) throw Fail("a value");
+            bool negate = false;
+            int column = Pos;
+            if (text[Pos] == '-' && !StartsNumber(Pos + 1, end)) { negate = true; Pos++; }
+            else if (text[Pos] == '+') Pos++;
+            while (true)
+            {
+                SkipSpace(end);
+                var term = ParseAtom(end);
+                terms.Add((negate ? new NegateExpr(term) : term, column));
+                SkipSpace(end);
+                if (Pos >= end || (text[Pos] != '+' && text[Pos] != '-')) break;
+                column = Pos;
+                negate = text[Pos] == '-';
+                Pos++;
+            }
+            return terms;
+        }
+
+        private bool StartsNumber(int i, int end) => i < end && char.IsAsciiDigit(text[i]);
+
+        private ValueExpr ParseAtom(int end)
+        {
+            if (Pos >= end) throw Fail("a value");
+            char c = text[Pos];
+            if (c == '(')
+            {
+                int close = Matching(Pos, end, '(', ')');
+                Pos++;
+                var inner = ParseSum(close);
+                SkipSpace(close);
+                if (Pos != close) throw Fail("')'");
+                Pos = close + 1;
+                return inner.Count == 1 ? inner[0].Item1 : new SumExpr(inner.Select(t => t.Item1).ToArray());
+            }
+            if (c == '{')
+            {
+                int close = Matching(Pos, end, '{', '}');
+                int open = Pos;
+                var game = ParseBraced(open + 1, close);
+                Pos = close + 1;
+                return game;
+            }
+            if (c == '±')
+            {
+                Pos++;
+                SkipSpace(end);
+                var x = ParseNumber(end) ?? throw Fail("a number after '±'");
+                return new SwitchExpr(x);
+            }
+            // number, then optional ups multiplier or star
+            Dyadic? number = null;
+            if (c == '-' || char.IsAsciiDigit(c)) number = ParseNumber(end) ?? throw Fail("a number");
+            int ups = ParseUps(end, number, out bool multiplied);
+            if (multiplied) number = null;
+            int star = ParseStar(end, out bool hasStar);
+            if (number is null && ups == 0 && !hasStar) throw Fail("a value (number, *, ↑, ↓, ±x, '{' or '(')");
+            var x0 = number ?? Dyadic.Zero;
+            if (ups == 0 && !hasStar) return new NumberExpr(x0);
+            return new UpStarExpr(x0, ups, star);
+        }
+
+        private int ParseUps(int end, Dyadic? number, out bool multiplied)
+        {
+            multiplied = false;
+            int sign = 0, count = 1;
+            if (Peek(end, "↑")) { sign = 1; Pos++; }
+            else if (Peek(end, "↓")) { sign = -1; Pos++; }
+            else if (Peek(end, "⇑")) { sign = 1; count = 2; Pos++; }
+            else if (Peek(end, "⇓")) { sign = -1; count = 2; Pos++; }
+            else if (Peek(end, "up")) { sign = 1; Pos += 2; }
+            else if (Peek(end, "down")) { sign = -1; Pos += 4; }
+            if (sign == 0) return 0;
+            if (number is { } n)
+            {
+                if (!n.IsInteger || n.Sign <= 0 || count != 1) { Pos--; throw Fail("a whole number of ups such as 3↑"); }
+                multiplied = true;
+                count = (int)n.Numerator;
+            }
+            return sign * count;
+        }
+
+        private int ParseStar(int end, out bool hasStar)
+        {
+            hasStar = false;
+            if (!Peek(end, "*")) return 0;
+            hasStar = true;
+            Pos++;
+            int start = Pos;
+            while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
+            if (Pos == start) return 1;
+            if (!int.TryParse(text.AsSpan(start, Pos - start), out int m)) { Pos = start; throw Fail("a nimber size that fits an int"); }
+            return m;
+        }
+
+        private Dyadic? ParseNumber(int end)
+        {
+            int start = Pos;
+            if (Pos < end && text[Pos] == '-') Pos++;
+            int digits = Pos;
+            while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
+            if (Pos == digits) { Pos = start; return null; }
+            if (Pos < end && text[Pos] == '/')
+            {
+                Pos++;
+                int den = Pos;
+                while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
+                if (Pos == den) throw Fail("a denominator (a power of two)");
+            }
+            var span = text.AsSpan(start, Pos - start);
+            if (!Dyadic.TryParse(span, out var value))
+            {
+                Pos = start;
+                throw Fail("a dyadic number (its denominator must be a power of two)");
+            }
+            return value;
+        }
+
+        private int Matching(int open, int end, char o, char c)
+        {
+            int depth = 0;
+            for (int i = open; i < end; i++)
+            {
+                if (text[i] == '{' || text[i] == '(') depth++;
+                else if (text[i] == '}' || text[i] == ')')
+                {
+                    depth--;
+                    if (depth == 0)
+                    {
+                        if (text[i] != c) { Pos = i; throw Fail($"'{c}'"); }
+                        return i;
+                    }
+                }
+            }
+            Pos = end;
+            throw Fail($"'{c}' to close the '{o}' at column {open + 1}");
+        }
+
+        /// <summary>The inside of braces, [start, end): split at the longest run of bars.</summary>
+        private ValueExpr ParseBraced(int start, int end)
+        {
+            int bestAt = -1, bestLen = 0, depth = 0;
+            for (int i = start; i < end; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (ch == '|' && depth == 0)
+                {
+                    int j = i;
+                    while (j < end && text[j] == '|') j++;
+                    int len = j - i;
+                    if (len > bestLen) { bestLen = len; bestAt = i; }
+                    else if (len == bestLen) { Pos = i; throw Fail($"a longer bar run than the one at column {bestAt + 1} (the same number of bars twice is ambiguous)"); }
+                    i = j - 1;
+                }
+            }
+            if (bestAt < 0) { Pos = start; throw Fail("'|' between the Left and Right options"); }
+            var left = ParseSide(start, bestAt);
+            var right = ParseSide(bestAt + bestLen, end);
+            return new OptionsExpr(left, right);
+        }
+
+        private IReadOnlyList<ValueExpr> ParseSide(int start, int end)
+        {
+            // A side that still holds bars is one game written without its own braces.
+            int depth = 0;
+            bool bars = false;
+            for (int i = start; i < end; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (ch == '|' && depth == 0) bars = true;
+            }
+            if (bars) return [ParseBraced(start, end)];
+            var options = new List<ValueExpr>();
+            Pos = start;
+            SkipSpace(end);
+            if (Pos >= end) return options;
+            while (true)
+            {
+                int comma = NextComma(Pos, end);
+                var terms = ParseSum(comma);
+                SkipSpace(comma);
+                if (Pos != comma) throw Fail(comma == end ? "'|', '}' or ','" : "','");
+                options.Add(terms.Count == 1 ? terms[0].Item1 : new SumExpr(terms.Select(t => t.Item1).ToArray()));
+                if (comma == end) break;
+                Pos = comma + 1;
+            }
+            return options;
+        }
+
+        private int NextComma(int from, int end)
+        {
+            int depth = 0;
+            for (int i = from; i < end; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (ch == ',' && depth == 0) return i;
+            }
+            return end;
+        }
+    }
+
+    // ------------------------------------------------------------------ out
+
+    /// <summary>Writes a canonical game in the published notation (Unicode, or words with <paramref name="ascii"/>).</summary>
+    public static string Format(GameStore store, Game g, bool ascii = false)
+    {
+        var sb = new StringBuilder();
+        var (inner, bars) = FormatPart(store, g, ascii);
+        if (bars > 0) sb.Append('{').Append(inner).Append('}');
+        else sb.Append(inner);
+        return sb.ToString();
+    }
+
+    /// <summary>Text of g, and for brace forms the text inside the braces with its number of bars (0 for atoms).</summary>
+    private static (string Text, int Bars) FormatPart(GameStore store, Game g, bool ascii)
+    {
+        if (store.TryGetNumber(g, out var x)) return (x.ToString(), 0);
+        if (store.TryGetUpStar(g, out var ux, out int n, out int m)) return (FormatUpStar(ux, n, m, ascii), 0);
+        var left = store.LeftOptions(g);
+        var right = store.RightOptions(g);
+        if (!ascii && left.Count == 1 && right.Count == 1 && store.TryGetNumber(left[0], out var a)
+            && store.TryGetNumber(right[0], out var b) && a == -b && a.Sign > 0)
+            return ("±" + a, 0);
+        var (lt, lb) = FormatSide(store, left, ascii);
+        var (rt, rb) = FormatSide(store, right, ascii);
+        int bars = Math.Max(lb, rb) + 1;
+        return (lt + new string('|', bars) + rt, bars);
+    }
+
+    private static (string Text, int Bars) FormatSide(GameStore store, IReadOnlyList<Game> options, bool ascii)
+    {
+        if (options.Count == 1)
+        {
+            var (t, b) = FormatPart(store, options[0], ascii);
+            return (t, b);
+        }
+        return (string.Join(",", options.Select(o => Format(store, o, ascii))), 0);
+    }
+
+    private static string FormatUpStar(Dyadic x, int n, int m, bool ascii)
+    {
+        string star = m == 0 ? "" : m == 1 ? "*" : "*" + m;
+        if (n == 0) return (x.IsZero ? "" : x.ToString()) + star;
+        string ups;
+        int k = Math.Abs(n);
+        if (ascii) ups = (k == 1 ? "" : k.ToString()) + (n > 0 ? "up" : "down");
+        else if (k == 1) ups = n > 0 ? "↑" : "↓";
+        else if (k == 2) ups = n > 0 ? "⇑" : "⇓";
+        else ups = k + (n > 0 ? "↑" : "↓");
+        string inf = ups + star;
+        return x.IsZero ? inf : x + " + " + inf;
+    }
+}
+
+/// <summary>Writes value expressions back as text, as written (no simplification).</summary>
+public static class ValueExprWriter
+{
+    public static string Write(ValueExpr expr, bool ascii = false) => expr switch
+    {
+        NumberExpr n => n.Value.ToString(),
+        UpStarExpr u => WriteUpStar(u, ascii),
+        SwitchExpr s => ascii ? $"{{{s.X}|{-s.X}}}" : "±" + s.X,
+        OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
+        SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
+        NegateExpr n => n.Inner is NumberExpr or UpStarExpr or OptionsExpr ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
+        _ => throw new ArgumentException($"unknown expression {expr}"),
+    };
+
+    private static string WriteInside(OptionsExpr o, bool ascii)
+    {
+        var (l, lb) = Side(o.Left, ascii);
+        var (r, rb) = Side(o.Right, ascii);
+        return l + new string('|', Math.Max(lb, rb) + 1) + r;
+    }
+
+    private static int Bars(OptionsExpr o) =>
+        Math.Max(o.Left is [OptionsExpr a] ? Bars(a) : 0, o.Right is [OptionsExpr b] ? Bars(b) : 0) + 1;
+
+    private static (string, int) Side(IReadOnlyList<ValueExpr> options, bool ascii) =>
+        options is [OptionsExpr only] ? (WriteInside(only, ascii), Bars(only)) : (string.Join(",", options.Select(x => Write(x, ascii))), 0);
+
+    private static string WriteUpStar(UpStarExpr u, bool ascii)
+    {
+        string star = u.Star == 0 ? "" : u.Star == 1 ? "*" : "*" + u.Star;
+        if (u.Ups == 0) return (u.X.IsZero && star.Length > 0 ? "" : u.X.ToString()) + star;
+        int k = Math.Abs(u.Ups);
+        string ups = ascii ? (k == 1 ? "" : k.ToString()) + (u.Ups > 0 ? "up" : "down")
+            : k == 1 ? (u.Ups > 0 ? "↑" : "↓") : k == 2 ? (u.Ups > 0 ? "⇑" : "⇓") : k + (u.Ups > 0 ? "↑" : "↓");
+        return u.X.IsZero ? ups + star : $"{u.X} + {ups}{star}";
+    }
+}
