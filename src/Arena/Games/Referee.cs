@@ -4,6 +4,7 @@ using Bramble.Arena.Schedule;
 using Bramble.Arena.Spec;
 using Bramble.Rules;
 using Bramble.Values;
+using Bramble.Wire;
 using Bramble.Wire.Client;
 using Serilog;
 
@@ -60,7 +61,7 @@ public sealed class Referee(EngineTimeouts timeouts, ILogger log)
                 var engine = EngineOf(mover);
                 var remaining = clock.Remaining(mover);
                 var reply = await Ask(mover, engine, e => e.Client.ThinkAsync(mover, (long)remaining.TotalMilliseconds,
-                    control.IncMs, remaining, note => log.Debug("{Player} {Note}", e.PlayerId, note.Rest), cancel)).ConfigureAwait(false);
+                    control.IncMs, remaining, note => log.Debug("{Player} note {Note}", e.PlayerId, string.Join(' ', note.Fields.Select(f => $"{f.Key}={f.Value}"))), cancel)).ConfigureAwait(false);
                 if (!clock.Charge(mover, reply.Elapsed))
                     throw new Forfeit(mover, GameEnd.Timeout, $"{engine.PlayerId} picked after {reply.Elapsed.TotalMilliseconds:0} ms with {remaining.TotalMilliseconds:0} ms on its clock");
                 var move = Legal(position, mover, legal, reply.Move, engine.PlayerId);
@@ -94,10 +95,10 @@ public sealed class Referee(EngineTimeouts timeouts, ILogger log)
         }
         catch (Exception e) when (e is IllegalMoveException or FormatException or ArgumentException)
         {
-            throw new Forfeit(mover, GameEnd.BadMove, $"{player} picked '{ReplyLine.Shorten(pick)}', which is not a move here: {e.Message}");
+            throw new Forfeit(mover, GameEnd.BadMove, $"{player} picked {Codec.Quote(pick)}, which is not a move here: {e.Message}");
         }
         if (!legal.Contains(move))
-            throw new Forfeit(mover, GameEnd.BadMove, $"{player} picked '{ReplyLine.Shorten(pick)}', which is not a legal move for {mover.Word()}");
+            throw new Forfeit(mover, GameEnd.BadMove, $"{player} picked {Codec.Quote(pick)}, which is not a legal move for {mover.Word()}");
         return move;
     }
 

@@ -24,10 +24,10 @@ public sealed class EngineClient : IAsyncDisposable
     private readonly Task _stdoutPump;
     private readonly Task _stderrPump;
     private readonly Action<string>? _stderrSink;
-    private volatile Exception? _readFault;
     private bool _broken;
     private string? _pendingThink;
     private bool _disposed;
+    private IReadOnlyList<ProcessTree.Member> _tree = [];
 
     private EngineClient(Process process, EngineLaunch launch, ClientLimits limits, Action<string>? stderrSink)
     {
@@ -62,7 +62,7 @@ public sealed class EngineClient : IAsyncDisposable
     }
 
     /// <summary>False once the engine exited, sent something unreadable, or owes a reply the harness gave up on.</summary>
-    public bool IsUsable => !_broken && !_disposed && _readFault is null && !HasExited;
+    public bool IsUsable => !_broken && !_disposed && !HasExited;
 
     /// <summary>Starts the process from its argv, with no shell. Throws <see cref="EngineFailureException"/> (<c>StartFailed</c>).</summary>
     public static EngineClient Start(EngineLaunch launch, ClientLimits? limits = null, Action<string>? stderrSink = null)
@@ -94,28 +94,27 @@ public sealed class EngineClient : IAsyncDisposable
     /// <summary><c>hello twine 1</c> → <c>welcome</c>.</summary>
     public async Task<Welcome> HelloAsync(TimeSpan timeout, CancellationToken cancel = default)
     {
-        var reply = await RequestAsync("hello twine 1", timeout, ["welcome"], null, cancel).ConfigureAwait(false);
-        var rulesets = reply.Line.Key("rulesets") is { Length: > 0 } list
-            ? list.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
-            : [];
-        return new Welcome(reply.Line.Key("name") ?? "", reply.Line.Key("version") ?? "", rulesets);
+        var (reply, _) = await RequestAsync(new HelloRequest(HelloRequest.CurrentVersion), timeout, null, cancel).ConfigureAwait(false);
+        NoteTree();
+        return reply is WelcomeReply welcome
+            ? new Welcome(welcome.Name, welcome.Version, welcome.Rulesets)
+            : throw Unexpected("hello", reply, "welcome");
     }
 
     /// <summary><c>set &lt;name&gt; &lt;value&gt;</c> → <c>ok</c>; an <c>err</c> throws <c>Refused</c>.</summary>
     public Task SetAsync(string name, string value, TimeSpan timeout, CancellationToken cancel = default) =>
-        ExpectOkAsync($"set {Token(name, nameof(name))} {Text(value, nameof(value))}", timeout, cancel);
+        ExpectOkAsync(new SetRequest(name, value), timeout, cancel);
 
     /// <summary><c>begin &lt;ruleset&gt; &lt;position&gt;</c> → <c>ok components=n</c> (n null when not given).</summary>
     public async Task<int?> BeginAsync(string ruleset, string position, TimeSpan timeout, CancellationToken cancel = default)
     {
-        var reply = await RequestAsync($"begin {Token(ruleset, nameof(ruleset))} {Text(position, nameof(position))}", timeout, ["ok", "err"], null, cancel).ConfigureAwait(false);
-        ThrowIfErr(reply.Line);
-        return int.TryParse(reply.Line.Key("components"), out var n) ? n : null;
+        var ok = await ExpectOkAsync(new BeginRequest(ruleset, position), timeout, cancel).ConfigureAwait(false);
+        return ok.Components;
     }
 
     /// <summary><c>apply &lt;side&gt; &lt;move&gt;</c> → <c>ok</c>.</summary>
     public Task ApplyAsync(Side side, string move, TimeSpan timeout, CancellationToken cancel = default) =>
-        ExpectOkAsync($"apply {side.Word()} {Token(move, nameof(move))}", timeout, cancel);
+        ExpectOkAsync(new ApplyRequest(side, move), timeout, cancel);
 
     /// <summary>
     /// <c>think &lt;side&gt; clock= inc=</c> → notes, then <c>pick</c>. The time-out is the side's
@@ -123,15 +122,12 @@ public sealed class EngineClient : IAsyncDisposable
     /// <see cref="RecoverAsync"/> can try to bring the engine back in step.
     /// </summary>
     public async Task<ThinkResult> ThinkAsync(Side side, long clockMs, long incMs, TimeSpan timeout,
-        Action<ReplyLine>? onNote = null, CancellationToken cancel = default)
+        Action<NoteReply>? onNote = null, CancellationToken cancel = default)
     {
-        var line = $"think {side.Word()} clock={Math.Max(0, clockMs)} inc={Math.Max(0, incMs)}";
-        var reply = await RequestAsync(line, timeout, ["pick", "err"], onNote, cancel, isThink: true).ConfigureAwait(false);
-        ThrowIfErr(reply.Line);
-        if (reply.Line.Words.Count == 0)
-            throw Broken(EngineFailureKind.BadReply, $"'pick' without a move");
-        var move = reply.Line.Words[0];
-        return new ThinkResult(move == "none" ? null : move, reply.Elapsed);
+        var request = new ThinkRequest(side, Math.Max(0, clockMs), Math.Max(0, incMs));
+        var (reply, elapsed) = await RequestAsync(request, timeout, onNote, cancel).ConfigureAwait(false);
+        ThrowIfErr(reply);
+        return reply is PickReply pick ? new ThinkResult(pick.Move, elapsed) : throw Unexpected("think", reply, "pick");
     }
 
     /// <summary>
@@ -140,17 +136,18 @@ public sealed class EngineClient : IAsyncDisposable
     /// </summary>
     public async Task<bool> RecoverAsync(TimeSpan grace)
     {
-        if (_pendingThink is null || _disposed || _readFault is not null || HasExited) return false;
+        if (_pendingThink is null || _disposed || HasExited) return false;
         try
         {
-            await SendAsync("halt", grace, CancellationToken.None).ConfigureAwait(false);
+            await SendAsync(Codec.Format(new HaltRequest()), grace, CancellationToken.None).ConfigureAwait(false);
             using var timer = new CancellationTokenSource(grace);
             while (true)
             {
                 var received = await _lines.Reader.ReadAsync(timer.Token).ConfigureAwait(false);
-                if (!ReplyLine.TryParse(received.Text, out var reply, out _)) return false;
-                if (reply.Word == "note") continue;
-                if (reply.Word != "pick") return false;
+                if (received.Text is null) return false;
+                var parsed = Codec.ParseReply(received.Text);
+                if (parsed.Message is NoteReply) continue;
+                if (parsed.Message is not PickReply) return false;
                 _pendingThink = null;
                 _broken = false;
                 return true;
@@ -165,12 +162,9 @@ public sealed class EngineClient : IAsyncDisposable
     /// <summary><c>assess</c> → <c>value &lt;value&gt; outcome=X</c>.</summary>
     public async Task<Assessment> AssessAsync(TimeSpan timeout, CancellationToken cancel = default)
     {
-        var reply = await RequestAsync("assess", timeout, ["value", "err"], null, cancel).ConfigureAwait(false);
-        ThrowIfErr(reply.Line);
-        // The value may contain spaces ("1/2 + ↑*"), so it is the text before the first key=value pair.
-        var value = string.Join(' ', reply.Line.Rest.Split(' ', StringSplitOptions.RemoveEmptyEntries)
-            .TakeWhile(t => !(t.Contains('=') && reply.Line.Keys.ContainsKey(t[..t.IndexOf('=')]))));
-        return new Assessment(value, reply.Line.Key("outcome"));
+        var (reply, _) = await RequestAsync(new AssessRequest(), timeout, null, cancel).ConfigureAwait(false);
+        ThrowIfErr(reply);
+        return reply is ValueReply value ? new Assessment(value.Value, value.Outcome) : throw Unexpected("assess", reply, "value");
     }
 
     /// <summary>
@@ -181,9 +175,10 @@ public sealed class EngineClient : IAsyncDisposable
     {
         if (IsUsable)
         {
+            NoteTree();
             try
             {
-                await RequestAsync("bye", _limits.ExitGrace, ["bye"], null, CancellationToken.None).ConfigureAwait(false);
+                await RequestAsync(new ByeRequest(), _limits.ExitGrace, null, CancellationToken.None).ConfigureAwait(false);
                 await _process.WaitForExitAsync().WaitAsync(_limits.ExitGrace).ConfigureAwait(false);
             }
             catch (Exception e) when (e is EngineFailureException or TimeoutException or OperationCanceledException)
@@ -194,7 +189,10 @@ public sealed class EngineClient : IAsyncDisposable
         await DisposeAsync().ConfigureAwait(false);
     }
 
-    /// <summary>Kills the whole process tree at once (safe to call at any time, from any thread).</summary>
+    /// <summary>
+    /// Kills the whole process tree at once (safe to call at any time, from any thread): the tree as
+    /// it is now, and whatever is left of the tree last seen, in case the engine itself is gone already.
+    /// </summary>
     public void Kill()
     {
         try
@@ -205,6 +203,17 @@ public sealed class EngineClient : IAsyncDisposable
         {
             // Already gone, or exiting right now.
         }
+        ProcessTree.KillSurvivors(_tree);
+    }
+
+    /// <summary>
+    /// Remembers the engine's descendants (after the handshake, and before saying bye), so processes
+    /// it started can still be killed after it has exited and they have lost their parent.
+    /// </summary>
+    private void NoteTree()
+    {
+        var now = ProcessTree.Descendants(ProcessId);
+        if (now.Count > 0 || _tree.Count > 0) _tree = _tree.Concat(now).Distinct().ToList();
     }
 
     public async ValueTask DisposeAsync()
@@ -225,31 +234,53 @@ public sealed class EngineClient : IAsyncDisposable
         _process.Dispose();
     }
 
-    private async Task ExpectOkAsync(string line, TimeSpan timeout, CancellationToken cancel)
+    private async Task<OkReply> ExpectOkAsync(Request request, TimeSpan timeout, CancellationToken cancel)
     {
-        var reply = await RequestAsync(line, timeout, ["ok", "err"], null, cancel).ConfigureAwait(false);
-        ThrowIfErr(reply.Line);
+        var (reply, _) = await RequestAsync(request, timeout, null, cancel).ConfigureAwait(false);
+        ThrowIfErr(reply);
+        return reply as OkReply ?? throw Unexpected(Codec.Format(request).Split(' ')[0], reply, "ok");
     }
 
-    private void ThrowIfErr(ReplyLine line)
+    private void ThrowIfErr(Reply reply)
     {
-        if (line.Word != "err") return;
-        var code = line.Words.Count > 0 ? line.Words[0] : "";
+        if (reply is not ErrReply err) return;
         // A refusal is a complete, well-formed answer: the engine is still in step.
-        throw new EngineFailureException(EngineFailureKind.Refused, $"{Launch.Label} answered '{ReplyLine.Shorten("err " + line.Rest, 200)}'", code);
+        throw new EngineFailureException(EngineFailureKind.Refused, $"{Launch.Label} answered 'err {err.Code} {Codec.Quote(err.Text).Trim('\'')}'", err.Code);
     }
 
-    private async Task<(ReplyLine Line, TimeSpan Elapsed)> RequestAsync(string line, TimeSpan timeout,
-        string[] finals, Action<ReplyLine>? onNote, CancellationToken cancel, bool isThink = false)
+    /// <summary>A well-formed reply of the wrong kind (say <c>ok</c> to <c>think</c>): the engine is out of step.</summary>
+    private EngineFailureException Unexpected(string request, Reply reply, string expected) =>
+        Broken(EngineFailureKind.BadReply, $"{Launch.Label} replied to '{request}' with {Describe(reply)}; expected {expected}");
+
+    private static string Describe(Reply reply)
+    {
+        try
+        {
+            return Codec.Quote(Codec.Format(reply));
+        }
+        catch (ArgumentException)
+        {
+            return "a " + reply.GetType().Name;
+        }
+    }
+
+    /// <summary>
+    /// Sends one request and waits for its final reply, passing notes on. Which reply kinds are
+    /// final is the caller's business; here any reply but a note ends the wait. The elapsed time
+    /// runs from just before the send to the moment the reply's line came off the pipe.
+    /// </summary>
+    private async Task<(Reply Reply, TimeSpan Elapsed)> RequestAsync(Request request, TimeSpan timeout,
+        Action<NoteReply>? onNote, CancellationToken cancel)
     {
         ObjectDisposedException.ThrowIf(_disposed, this);
         if (_broken) throw new EngineFailureException(EngineFailureKind.BadReply, $"{Launch.Label} is out of step with the harness");
+        var line = Codec.Format(request);
         DrainStrayLines(onNote);
         using var timer = CancellationTokenSource.CreateLinkedTokenSource(cancel);
         timer.CancelAfter(timeout);
         var sent = Stopwatch.GetTimestamp();
         await SendAsync(line, timeout, cancel).ConfigureAwait(false);
-        if (isThink) _pendingThink = line;
+        if (request is ThinkRequest) _pendingThink = line;
         long bytes = 0;
         while (true)
         {
@@ -260,7 +291,7 @@ public sealed class EngineClient : IAsyncDisposable
             }
             catch (OperationCanceledException) when (!cancel.IsCancellationRequested)
             {
-                throw Broken(EngineFailureKind.Timeout, $"{Launch.Label} gave no reply to '{ReplyLine.Shorten(line)}' within {timeout.TotalMilliseconds:0} ms");
+                throw Broken(EngineFailureKind.Timeout, $"{Launch.Label} gave no reply to {Codec.Quote(line)} within {timeout.TotalMilliseconds:0} ms");
             }
             catch (OperationCanceledException)
             {
@@ -269,38 +300,38 @@ public sealed class EngineClient : IAsyncDisposable
             }
             catch (ChannelClosedException)
             {
-                throw ReadFailure(line);
+                throw Broken(EngineFailureKind.Exited, $"{Launch.Label} ended its output before replying to {Codec.Quote(line)}{ExitNote()}");
             }
             bytes += received.Bytes;
             if (bytes > _limits.MaxRequestOutputBytes)
-                throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} wrote more than {_limits.MaxRequestOutputBytes} bytes in reply to '{ReplyLine.Shorten(line)}'");
-            if (!ReplyLine.TryParse(received.Text, out var reply, out var problem))
-                throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} replied to '{ReplyLine.Shorten(line)}' with '{ReplyLine.Shorten(received.Text)}': {problem}");
-            if (reply.Word == "note")
+                throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} wrote more than {_limits.MaxRequestOutputBytes} bytes in reply to {Codec.Quote(line)}");
+            if (received.Text is null)
+                throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} replied to {Codec.Quote(line)} with {received.Error!.Text}");
+            var parsed = Codec.ParseReply(received.Text);
+            if (!parsed.IsOk)
+                throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} replied to {Codec.Quote(line)} with {Codec.Quote(received.Text)}: {parsed.Error!.Text}");
+            if (parsed.Message is NoteReply note)
             {
-                onNote?.Invoke(reply);
+                onNote?.Invoke(note);
                 continue;
             }
-            if (!finals.Contains(reply.Word))
-                throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} replied to '{ReplyLine.Shorten(line)}' with '{ReplyLine.Shorten(received.Text)}'; expected {string.Join(" or ", finals)}");
-            if (isThink) _pendingThink = null;
-            return (reply, Stopwatch.GetElapsedTime(sent, received.Timestamp));
+            if (request is ThinkRequest) _pendingThink = null;
+            return (parsed.Message!, Stopwatch.GetElapsedTime(sent, received.Timestamp));
         }
     }
 
     /// <summary>Lines that arrived between requests: notes are passed on, anything else means the engine is out of step.</summary>
-    private void DrainStrayLines(Action<ReplyLine>? onNote)
+    private void DrainStrayLines(Action<NoteReply>? onNote)
     {
         while (_lines.Reader.TryRead(out var received))
         {
-            if (ReplyLine.TryParse(received.Text, out var reply, out _) && reply.Word == "note")
+            if (received.Text is not null && Codec.ParseReply(received.Text).Message is NoteReply note)
             {
-                onNote?.Invoke(reply);
+                onNote?.Invoke(note);
                 continue;
             }
-            throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} wrote '{ReplyLine.Shorten(received.Text)}' when no request was pending");
+            throw Broken(EngineFailureKind.BadReply, $"{Launch.Label} wrote {Codec.Quote(received.Text ?? received.Error!.Text)} when no request was pending");
         }
-        if (_readFault is not null && _lines.Reader.Completion.IsCompleted) throw ReadFailure("the next request");
     }
 
     private async Task SendAsync(string line, TimeSpan timeout, CancellationToken cancel)
@@ -333,13 +364,6 @@ public sealed class EngineClient : IAsyncDisposable
         await _stdin.FlushAsync(cancel).ConfigureAwait(false);
     }
 
-    private EngineFailureException ReadFailure(string request) => _readFault switch
-    {
-        LineTooLongException tooLong => Broken(EngineFailureKind.BadReply, $"{Launch.Label} wrote {tooLong.Message} in reply to '{ReplyLine.Shorten(request)}'"),
-        null => Broken(EngineFailureKind.Exited, $"{Launch.Label} ended its output before replying to '{ReplyLine.Shorten(request)}'{ExitNote()}"),
-        var other => Broken(EngineFailureKind.Exited, $"{Launch.Label}: reading its output failed: {other.Message}"),
-    };
-
     private EngineFailureException Broken(EngineFailureKind kind, string message)
     {
         _broken = true;
@@ -360,22 +384,26 @@ public sealed class EngineClient : IAsyncDisposable
 
     private async Task PumpStdoutAsync()
     {
-        var reader = new BoundedLineReader(_process.StandardOutput.BaseStream, _limits.MaxLineBytes);
+        // The shared reader bounds each line at 1 MiB and decodes strictly: an overlong line or
+        // bad UTF-8 arrives as an error in its place, which the request in progress turns into a bad reply.
+        var reader = new LineReader(_process.StandardOutput.BaseStream, _limits.MaxLineBytes);
         try
         {
             while (await reader.ReadLineAsync().ConfigureAwait(false) is { } line)
-                await _lines.Writer.WriteAsync(line).ConfigureAwait(false);
-            _lines.Writer.TryComplete();
+            {
+                var bytes = line.Text is { } text ? Encoding.UTF8.GetByteCount(text) + 1 : _limits.MaxLineBytes;
+                await _lines.Writer.WriteAsync(new ReceivedLine(line.Text, line.Error, bytes, Stopwatch.GetTimestamp())).ConfigureAwait(false);
+            }
         }
         catch (ChannelClosedException)
         {
             // The exit watcher closed the buffer already.
         }
-        catch (Exception e) when (e is LineTooLongException or IOException or ObjectDisposedException or InvalidOperationException)
+        catch (Exception e) when (e is IOException or ObjectDisposedException or InvalidOperationException)
         {
-            _readFault = e;
-            _lines.Writer.TryComplete();
+            // A pipe torn down by a kill: the same as the end of output.
         }
+        _lines.Writer.TryComplete();
     }
 
     private async Task PumpStderrAsync()
@@ -424,19 +452,5 @@ public sealed class EngineClient : IAsyncDisposable
         {
             _lines.Writer.TryComplete();
         }
-    }
-
-    private static string Token(string text, string what)
-    {
-        if (text.Length == 0 || text.Any(c => c is ' ' or '\n' or '\r'))
-            throw new ArgumentException($"a twine/1 {what} must be one token: '{text}'", what);
-        return text;
-    }
-
-    private static string Text(string text, string what)
-    {
-        if (text.Contains('\n') || text.Contains('\r'))
-            throw new ArgumentException($"a twine/1 {what} must fit on one line", what);
-        return text;
     }
 }

@@ -1,3 +1,5 @@
+using Bramble.Values;
+
 namespace Bramble.Wire.Client;
 
 /// <summary>What an engine said about itself in its <c>welcome</c> reply.</summary>
@@ -13,4 +15,7 @@ public sealed record Welcome(string Name, string Version, IReadOnlyList<string> 
 public sealed record ThinkResult(string? Move, TimeSpan Elapsed);
 
 /// <summary>An engine's answer to <c>assess</c>.</summary>
-public sealed record Assessment(string Value, string? Outcome);
+public sealed record Assessment(string Value, Outcome Outcome);
+
+/// <summary>One line off the engine's stdout: its text, or the reason it is not a line of text, with its size and arrival time.</summary>
+internal readonly record struct ReceivedLine(string? Text, WireError? Error, int Bytes, long Timestamp);
