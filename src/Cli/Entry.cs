@@ -24,6 +24,7 @@ public static class Entry
         root.Subcommands.Add(DrawVerb.Build());
         root.Subcommands.Add(PlayVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
+        root.Subcommands.Add(MatchVerb.Build());
 
         var parse = root.Parse(args);
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
