@@ -6,7 +6,7 @@ public static class Rulesets
     private static readonly IRuleset[] s_all =
     [
         // new Hackenbush.HackenbushRuleset(),
-        // new Domineering.DomineeringRuleset(),
+        new Domineering.DomineeringRuleset(),
         // new Forms.FormsRuleset(),
     ];
 
