@@ -25,6 +25,7 @@ public static class Entry
         root.Subcommands.Add(PlayVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
+        root.Subcommands.Add(EngineVerb.Build());
 
         var parse = root.Parse(args);
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
