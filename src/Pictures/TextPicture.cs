@@ -7,6 +7,7 @@ public static class TextPicture
 {
     public static string Draw(IPosition position) => position.Ruleset.Name switch
     {
+        "hackenbush" => HackenbushPicture.Text((Bramble.Rules.Hackenbush.HackenbushPosition)position),
         "domineering" => DomineeringPicture.Text((Bramble.Rules.Domineering.DomineeringPosition)position),
         _ => Generic(position),
     };

@@ -68,10 +68,15 @@ public static class PlayVerb
         public int Run()
         {
             output.WriteLine($"You play {human.Word()} ({Colour(human)}); the engine plays {human.Other().Word()} with {engine.Name}. Type 'help' for commands.");
+            IPosition? shown = null;
             while (true)
             {
-                output.WriteLine();
-                output.WriteLine(TextPicture.Draw(_position));
+                if (!ReferenceEquals(shown, _position))
+                {
+                    output.WriteLine();
+                    output.WriteLine(TextPicture.Draw(_position));
+                    shown = _position;
+                }
                 var moves = _position.Moves(_mover);
                 if (moves.Count == 0)
                 {
