@@ -7,7 +7,7 @@ public static class Rulesets
     [
         new Hackenbush.HackenbushRuleset(),
         new Domineering.DomineeringRuleset(),
-        // new Forms.FormsRuleset(),
+        new Forms.FormsRuleset(),
     ];
 
     public static IReadOnlyList<IRuleset> All => s_all;
