@@ -22,7 +22,9 @@ public static class Entry
         // One line per verb; each verb lives in Verbs/<Name>Verb.cs.
         root.Subcommands.Add(ValueVerb.Build());
         root.Subcommands.Add(DrawVerb.Build());
+        root.Subcommands.Add(PlayVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
+        root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
 
         var parse = root.Parse(args);

@@ -7,6 +7,7 @@ public static class PositionPicture
 {
     public static string Draw(IPosition position) => position.Ruleset.Name switch
     {
+        "domineering" => DomineeringPicture.Svg((Bramble.Rules.Domineering.DomineeringPosition)position),
         _ => throw new ArgumentException($"no picture for ruleset '{position.Ruleset.Name}' yet"),
     };
 }
