@@ -16,12 +16,17 @@ public static class EngineVerb
     public static Command Build()
     {
         var strategy = new Option<string?>("--strategy") { Description = $"Player to serve: {string.Join(", ", Players.Names)} (default: the strongest available)" };
-        var budget = new Option<long>("--budget-ms") { Description = "Thinking budget per move when think gives no clock, and the cap when it does", DefaultValueFactory = _ => EngineSettings.DefaultBudgetMs };
-        var seed = new Option<int>("--seed") { Description = "Seed for players that use chance", DefaultValueFactory = _ => 1 };
+        // Numbers are read as text and checked here, and unknown tokens are reported here too: the
+        // parser's own error path prints help on stdout, which belongs to the protocol in this verb.
+        var budget = new Option<string?>("--budget-ms") { Description = $"Thinking budget per move when think gives no clock, and the cap when it does (default {EngineSettings.DefaultBudgetMs})" };
+        var seed = new Option<string?>("--seed") { Description = "Seed for players that use chance (default 1)" };
         var command = new Command("engine", "Serve the twine/1 protocol on stdin and stdout (see docs/protocol.md)") { strategy, budget, seed };
         command.Options.Add(DbOption.Option);
+        command.TreatUnmatchedTokensAsErrors = false;
         command.SetAction(parse => Failures.Guard(() =>
         {
+            if (parse.UnmatchedTokens.Count > 0)
+                throw new InputException($"engine: unexpected {string.Join(" ", parse.UnmatchedTokens.Select(t => $"'{t}'"))}; usage: bramble engine [--strategy S] [--budget-ms N] [--seed X] [--db FILE] [--log FILE]");
             var settings = Settings(parse.GetValue(strategy), parse.GetValue(budget), parse.GetValue(seed));
             var db = parse.GetValue(DbOption.Option);
             // Check the database before serving, so a bad file is a bad-input exit rather than a broken session.
@@ -45,17 +50,25 @@ public static class EngineVerb
         return command;
     }
 
-    private static EngineSettings Settings(string? strategy, long budgetMs, int seed)
+    private static EngineSettings Settings(string? strategy, string? budgetText, string? seedText)
     {
-        var settings = EngineSettings.Default(Players.Names) with { Seed = seed };
+        var settings = EngineSettings.Default(Players.Names);
+        if (seedText is not null)
+        {
+            if (!int.TryParse(seedText, System.Globalization.NumberStyles.AllowLeadingSign, System.Globalization.CultureInfo.InvariantCulture, out var seed))
+                throw new InputException($"--seed: needs a whole number, got '{seedText}'");
+            settings = settings with { Seed = seed };
+        }
         if (strategy is not null)
         {
             var known = Players.Names.FirstOrDefault(n => string.Equals(n, strategy, StringComparison.OrdinalIgnoreCase))
                 ?? throw new InputException($"--strategy: unknown strategy '{strategy}'; known: {string.Join(", ", Players.Names)}");
             settings = settings with { Strategy = known };
         }
-        if (budgetMs is < 1 or > EngineSettings.MostMs)
-            throw new InputException($"--budget-ms: needs whole milliseconds from 1 to {EngineSettings.MostMs}, got {budgetMs}");
+        if (budgetText is null) return settings;
+        if (!long.TryParse(budgetText, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var budgetMs)
+            || budgetMs is < 1 or > EngineSettings.MostMs)
+            throw new InputException($"--budget-ms: needs whole milliseconds from 1 to {EngineSettings.MostMs}, got '{budgetText}'");
         return settings with { BudgetMs = budgetMs };
     }
 }

@@ -25,7 +25,7 @@ public sealed class FuzzLines(int seed, IReadOnlyList<string> positions, string 
     {
         string Side() => _random.Next(2) == 0 ? "left" : "right";
         string Number() => _random.Next(4) switch { 0 => "0", 1 => _random.Next(100).ToString(), _ => _random.Next(100_000).ToString() };
-        return _random.Next(22) switch
+        return _random.Next(23) switch
         {
             0 => "hello twine 1",
             1 => "hello twine " + _random.Next(3),
@@ -44,6 +44,7 @@ public sealed class FuzzLines(int seed, IReadOnlyList<string> positions, string 
             18 => "halt",
             19 => "ponder " + Number(),
             20 => $"apply {Side()} {_random.Next(1, 12)}.{_random.Next(1, 4)} mood=calm",
+            21 => $"apply {Side()} {(char)('a' + _random.Next(5))}{_random.Next(1, 6)}",
             _ => "assess now",
         };
     }
