@@ -21,7 +21,11 @@ public static class Entry
         root.Options.Add(VerboseOption);
         // One line per verb; each verb lives in Verbs/<Name>Verb.cs.
         root.Subcommands.Add(ValueVerb.Build());
+        root.Subcommands.Add(DrawVerb.Build());
+        root.Subcommands.Add(PlayVerb.Build());
+        root.Subcommands.Add(DbVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
+        root.Subcommands.Add(EngineVerb.Build());
 
         var parse = root.Parse(args);
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));

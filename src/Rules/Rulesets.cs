@@ -5,8 +5,8 @@ public static class Rulesets
 {
     private static readonly IRuleset[] s_all =
     [
-        // new Hackenbush.HackenbushRuleset(),
-        // new Domineering.DomineeringRuleset(),
+        new Hackenbush.HackenbushRuleset(),
+        new Domineering.DomineeringRuleset(),
         // new Forms.FormsRuleset(),
     ];
 
