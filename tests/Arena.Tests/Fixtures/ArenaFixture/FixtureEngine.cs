@@ -10,7 +10,8 @@ namespace Bramble.Arena.Fixture;
 /// its misbehaviour is due — after <c>--after N</c> thinks, and with <c>--once FILE</c> only in the
 /// first process to get there — and then does what <c>--mode</c> says:
 /// good, crash, hang, garbage, illegal, none, huge, slow, stubborn, wrong-kind, noisy, exit-at-start,
-/// spawn (starts a sleeping child at once, then plays well).
+/// spawn (starts a sleeping child at once, then plays well). <c>--pick</c> chooses how it plays well:
+/// random (seeded), first, or perfect.
 /// </summary>
 public sealed class FixtureEngine
 {
@@ -19,7 +20,8 @@ public sealed class FixtureEngine
     private readonly int _delayMs;
     private readonly string? _once;
     private readonly string _rulesets;
-    private readonly bool _pickFirst;
+    private readonly string _pick;
+    private readonly Bramble.Rules.ValueContext _values = new();
     private readonly Random _random;
     private readonly Stream _out = Console.OpenStandardOutput();
     private readonly Lock _write = new();
@@ -35,7 +37,7 @@ public sealed class FixtureEngine
         _delayMs = int.Parse(options.GetValueOrDefault("delay-ms", "0"));
         _once = options.GetValueOrDefault("once");
         _rulesets = options.GetValueOrDefault("rulesets", "heaps");
-        _pickFirst = options.GetValueOrDefault("pick") == "first";
+        _pick = options.GetValueOrDefault("pick", "random");
         _random = new Random(int.Parse(options.GetValueOrDefault("seed", "1")));
         if (options.TryGetValue("pid-dir", out var folder))
             File.WriteAllText(Path.Combine(folder, Environment.ProcessId.ToString()), _mode);
@@ -133,7 +135,7 @@ public sealed class FixtureEngine
     private void Think(Side side)
     {
         var moves = _position!.Moves(side);
-        var pick = moves.Count == 0 ? "none" : _position.FormatMove(_pickFirst ? moves[0] : moves[_random.Next(moves.Count)]);
+        var pick = moves.Count == 0 ? "none" : _position.FormatMove(Choose(side, moves));
         if (_mode == "noisy")
         {
             for (var i = 0; i < 20; i++)
@@ -182,6 +184,21 @@ public sealed class FixtureEngine
                 Say("pick " + pick);
                 break;
         }
+    }
+
+    /// <summary>random (seeded), first (the first legal move: deterministic), or perfect (a winning move when there is one).</summary>
+    private Bramble.Rules.Move Choose(Side side, IReadOnlyList<Bramble.Rules.Move> moves)
+    {
+        if (_pick == "first") return moves[0];
+        if (_pick == "perfect")
+        {
+            foreach (var move in moves)
+            {
+                var value = _rules.Value(_position!.Play(side, move), _values);
+                if (_values.Store.OutcomeOf(value).WinnerMovingFirst(side.Other()) == side) return move;
+            }
+        }
+        return moves[_random.Next(moves.Count)];
     }
 
     private void Say(string line)
