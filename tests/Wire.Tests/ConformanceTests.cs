@@ -67,6 +67,30 @@ public class ConformanceTests
     }
 
     [Fact]
+    public void AHackenbushGameThroughTheEngine()
+    {
+        using var engine = EngineProcess.Bramble("--strategy", "random");
+        Assert.StartsWith("welcome ", engine.Ask("hello twine 1"));
+        // Edge ids follow the text: BRR is e1 (blue), e2, e3 (red); GGG is e4, e5, e6.
+        Assert.Equal("ok components=2", engine.Ask("begin hackenbush BRR + GGG"));
+        // BRR = 1/4 by the sign-expansion rule, GGG = *3 (CHECKS.md §2, §3); a positive number plus a nimber is positive.
+        Assert.Equal("value 1/4*3 outcome=L", engine.Ask("assess"));
+        Assert.StartsWith("err bad-move ", engine.Ask("apply right e1")); // a blue edge: a move for the wrong side
+        Assert.StartsWith("err bad-move ", engine.Ask("apply left e9"));  // no such edge
+        Assert.Equal("ok", engine.Ask("apply left e4"));                  // green: either side may cut it; the stalk above falls
+        Assert.Equal("value 1/4 outcome=L", engine.Ask("assess"));
+        Assert.StartsWith("err bad-move ", engine.Ask("apply right e5")); // fell with e4
+        Assert.Equal("ok", engine.Ask("apply right e2"));
+        Assert.Equal("value 1 outcome=L", engine.Ask("assess"));          // B = 1 (CHECKS.md §2)
+        Assert.Equal("pick e1", engine.Ask("think left clock=1000 inc=10")); // the only edge left
+        Assert.StartsWith("err out-of-order ", engine.Ask("think right clock=1000 inc=10")); // right moved last
+        Assert.Equal("ok", engine.Ask("apply left e1"));
+        Assert.Equal("pick none", engine.Ask("think right clock=1000 inc=10")); // nothing left: right has lost
+        Assert.Equal("value 0 outcome=P", engine.Ask("assess"));
+        Assert.Equal("bye", engine.Ask("bye"));
+    }
+
+    [Fact]
     public void BadBytesAndOverlongLinesGetErrAndTheEngineKeepsServing()
     {
         using var engine = EngineProcess.Bramble("--strategy", "random");

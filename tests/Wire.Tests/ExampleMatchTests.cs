@@ -1,3 +1,6 @@
+using Bramble.Arena;
+using Bramble.Arena.Journal;
+using Bramble.Arena.Spec;
 using Bramble.Rules;
 using Bramble.Values;
 
@@ -34,6 +37,47 @@ public class ExampleMatchTests
         Assert.Equal(0, example.WaitForExit());
         Assert.Equal(0, bramble.WaitForExit());
     }
+
+    [Fact]
+    public async Task ExampleEnginePlaysAMatchInTheArenaHarnessWithoutForfeits()
+    {
+        var folder = Directory.CreateTempSubdirectory("bramble-example-match-");
+        try
+        {
+            var bin = AppContext.BaseDirectory;
+            File.WriteAllText(Path.Combine(folder.FullName, "garden.txt"), "# small garden beds\n3x3\n..#./..../....\n");
+            var spec = $$"""
+                {
+                  "title": "Garden club: the example engine",
+                  "ruleset": "domineering",
+                  "positions": { "file": "garden.txt" },
+                  "players": [
+                    { "id": "example", "run": ["dotnet", {{Json(Path.Combine(bin, "random-engine.dll"))}}, "5"] },
+                    { "id": "bramble", "run": ["dotnet", {{Json(Path.Combine(bin, "bramble.dll"))}}, "engine", "--strategy", "random"] }
+                  ],
+                  "format": "round-robin",
+                  "seats": "all-four",
+                  "clock": { "base_ms": 10000, "inc_ms": 100 },
+                  "parallel": 1,
+                  "adjudicate": "never",
+                  "journal": "games.jsonl"
+                }
+                """;
+            var specPath = Path.Combine(folder.FullName, "match.json");
+            File.WriteAllText(specPath, spec);
+            var match = new MatchSpecLoader(RulesetFinders.Registry).Load(specPath);
+            var report = await new MatchRunner(match, new MatchOptions { Fresh = true, Log = Serilog.Core.Logger.None }).RunAsync();
+            Assert.Equal(8, report.Records.Count); // 2 positions, one pair, four ways
+            // Every game ended because the loser had no move: no crash, time-out, bad move or bad reply.
+            Assert.All(report.Records, r => Assert.Equal(GameEnd.NoMove, r.End));
+        }
+        finally
+        {
+            folder.Delete(recursive: true);
+        }
+    }
+
+    private static string Json(string text) => System.Text.Json.JsonSerializer.Serialize(text);
 
     [Fact]
     public void ExampleEngineAnswersBadRequestsWithErr()

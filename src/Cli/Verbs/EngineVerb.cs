@@ -35,6 +35,13 @@ public static class EngineVerb
             {
                 Version = EngineSetup.VersionOf(typeof(EngineVerb).Assembly),
                 Settings = settings,
+                CreatePlayer = (name, seed) =>
+                {
+                    var player = Players.Create(name, seed);
+                    // The perfect player keeps its own value context; the database serves it too.
+                    if (player is PerfectPlayer perfect) DbOption.Load(db, perfect.Context);
+                    return player;
+                },
                 CreateValueContext = () =>
                 {
                     var context = new ValueContext();

@@ -30,6 +30,7 @@ public sealed class EngineHost
     private long _haltMark;
     private ValueContext? _values;
     private LineWriter _out = null!;
+    private int _served;
 
     public EngineHost(EngineSetup? setup = null)
     {
@@ -41,6 +42,7 @@ public sealed class EngineHost
     /// <summary>Serves <paramref name="input"/> until <c>bye</c> or its end; returns the exit status (0).</summary>
     public int Serve(Stream input, Stream output)
     {
+        if (Interlocked.Exchange(ref _served, 1) != 0) throw new InvalidOperationException("an engine host serves one session; make a new one");
         _out = new LineWriter(output);
         _log.Information("engine {Name} {Version} serving twine/1 with strategy {Strategy}", _setup.Name, _setup.Version, _settings.Strategy);
         // Lines are read on their own thread so a halt is seen even while requests queue behind a think.
