@@ -31,6 +31,13 @@ public static class Entry
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
         try
         {
+            if (parse.Errors.Count > 0 && !IsHelpOrVersion(args))
+            {
+                // Bad command-line words are bad input: say what is wrong on stderr and exit 2.
+                foreach (var error in parse.Errors) Console.Error.WriteLine(error.Message);
+                Console.Error.WriteLine("see 'bramble --help' (or 'bramble <verb> --help')");
+                return BadInput;
+            }
             return parse.Invoke();
         }
         finally
@@ -38,6 +45,8 @@ public static class Entry
             Log.CloseAndFlush();
         }
     }
+
+    private static bool IsHelpOrVersion(string[] args) => args.Any(a => a is "--help" or "-h" or "-?" or "--version");
 
     private static void SetUpLogging(FileInfo? file, bool verbose)
     {
