@@ -23,6 +23,7 @@ public static class Entry
         root.Subcommands.Add(ValueVerb.Build());
         root.Subcommands.Add(DrawVerb.Build());
         root.Subcommands.Add(PlayVerb.Build());
+        root.Subcommands.Add(BenchVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
