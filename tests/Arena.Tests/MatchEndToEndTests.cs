@@ -90,7 +90,7 @@ public class MatchEndToEndTests
         {
             ("crash", GameEnd.Crash, []),
             ("hang", GameEnd.Timeout, []),
-            ("slow", GameEnd.Timeout, ["--delay-ms", "5000"]),
+            ("slow", GameEnd.Timeout, ["--delay-ms", "10000"]),
             ("garbage", GameEnd.BadReply, []),
             ("huge", GameEnd.BadReply, []),
             ("wrong-kind", GameEnd.BadReply, []),
@@ -106,7 +106,8 @@ public class MatchEndToEndTests
             format = "gauntlet",
             focus = "steady",
             seats = "swap",
-            clock = new { base_ms = 700, inc_ms = 0 },
+            // Short enough that the stuck engines lose on time soon, long enough for the others on a busy machine.
+            clock = new { base_ms = 2500, inc_ms = 0 },
             parallel = 2,
             journal = "j.jsonl",
         });

@@ -68,8 +68,8 @@ public class MatchVerbTests
         var records = JournalFile.Read(journal).Records;
         Assert.Equal(Enumerable.Range(1, 8), records.Select(r => r.Game).Order());
         Assert.All(records, r => Assert.NotNull(r.Theory));
-        // A perfect player never moves from a won position to a lost one.
-        Assert.DoesNotContain(records.SelectMany(r => r.Blunders), b => b.By == "pruner");
+        // Each blunder is charged to the player who made that ply (plies alternate from the first mover).
+        Assert.All(records, r => Assert.All(r.Blunders, b => Assert.Equal(r.PlayerOf(r.Moves[b.Ply - 1].Side), b.By)));
 
         var (mergeCode, merged, _) = Run(folder.Path, "match", "merge", journal, "--json");
         Assert.Equal(0, mergeCode);

@@ -105,7 +105,9 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             var parallel = OptionalInteger(root, "parallel", "$", min: 1, max: 1024);
             var adjudicate = Choice(root, "adjudicate", "$", Adjudication.Never,
                 ("never", Adjudication.Never), ("decided", Adjudication.Decided), ("numbers", Adjudication.Numbers));
-            var sprt = Sprt(root, players.Count);
+            // Count the entries as written: a player with a mistake in it is still a player.
+            var entries = root.TryGetProperty("players", out var list) && list.ValueKind == JsonValueKind.Array ? list.GetArrayLength() : players.Count;
+            var sprt = Sprt(root, entries);
             var journal = OptionalString(root, "journal", "$") ?? Path.Combine("results", Path.GetFileNameWithoutExtension(specPath) + ".jsonl");
             var analysisMs = OptionalInteger(root, "analysis_ms", "$", min: 0, max: 3_600_000) ?? 1000;
             var adjudicateMs = OptionalInteger(root, "adjudicate_ms", "$", min: 1, max: 3_600_000) ?? 100;
