@@ -15,7 +15,7 @@ public static class FormsPicture
 
     private const string Style =
         "text{font-family:sans-serif;font-size:12px;fill:#222;paint-order:stroke;stroke:white;stroke-width:3px}" +
-        ".left{stroke:#1f5fbf;stroke-width:2}.right{stroke:#c0392b;stroke-width:2}.node{fill:#333}" +
+        ".more{stroke:#999;stroke-width:1.5;stroke-dasharray:3,3}.left{stroke:#1f5fbf;stroke-width:2}.right{stroke:#c0392b;stroke-width:2}.node{fill:#333}" +
         ".plus{font-size:20px;font-weight:bold}.title{font-size:13px;font-weight:bold}";
 
     private sealed class Node(string label, Side? via)
@@ -91,7 +91,7 @@ public static class FormsPicture
         foreach (var c in n.Children)
         {
             var (cx, cy) = at(c);
-            svg.Add("line", c.Via == Side.Left ? "left" : "right", ("x1", x), ("y1", y), ("x2", cx), ("y2", cy), ("data-side", c.Via?.Word() ?? "more"));
+            svg.Add("line", c.Via switch { Side.Left => "left", Side.Right => "right", _ => "more" }, ("x1", x), ("y1", y), ("x2", cx), ("y2", cy), ("data-side", c.Via?.Word() ?? "more"));
             Draw(svg, c, at);
         }
         svg.Add("circle", "node", ("cx", x), ("cy", y), ("r", 3));
