@@ -30,10 +30,7 @@ public class ValuesBenchmarks
     [Benchmark]
     public int DayThreeCount()
     {
-        var store = new GameStore();
-        var day = new List<Game> { store.Zero };
-        for (int n = 1; n <= 3; n++) day = NextDay(store, day);
-        return day.Count;
+        return GamesByDay.BornBy(new GameStore(), 3).Count;
     }
 
     /// <summary>All pairwise sums of the pool in a fresh store (no cached sums).</summary>
@@ -55,27 +52,5 @@ public class ValuesBenchmarks
         int acc = 0;
         foreach (var a in _pool) foreach (var b in _pool) acc += (int)_store.Compare(a, b);
         return acc;
-    }
-
-    public static List<Game> NextDay(GameStore store, IReadOnlyList<Game> previous)
-    {
-        var antichains = new List<Game[]>();
-        var current = new List<Game>();
-        void Extend(int from)
-        {
-            antichains.Add(current.ToArray());
-            for (int i = from; i < previous.Count; i++)
-            {
-                var g = previous[i];
-                if (current.Any(c => store.Leq(c, g) || store.Leq(g, c))) continue;
-                current.Add(g);
-                Extend(i + 1);
-                current.RemoveAt(current.Count - 1);
-            }
-        }
-        Extend(0);
-        var seen = new HashSet<Game>();
-        foreach (var l in antichains) foreach (var r in antichains) seen.Add(store.Make(l, r));
-        return seen.ToList();
     }
 }

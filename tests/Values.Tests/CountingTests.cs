@@ -3,36 +3,7 @@ namespace Bramble.Values.Tests;
 /// <summary>Canonical simplification checked by counting the games born by each day.</summary>
 public class CountingTests
 {
-    /// <summary>All games born by day n+1: {A | B} for every pair of antichains A, B of the day-n games.</summary>
-    public static List<Game> NextDay(GameStore store, IReadOnlyList<Game> previous)
-    {
-        var antichains = Antichains(store, previous);
-        var seen = new HashSet<Game>();
-        foreach (var l in antichains)
-            foreach (var r in antichains)
-                seen.Add(store.Make(l, r));
-        return seen.ToList();
-    }
-
-    public static List<Game[]> Antichains(GameStore store, IReadOnlyList<Game> games)
-    {
-        var result = new List<Game[]>();
-        var current = new List<Game>();
-        void Extend(int from)
-        {
-            result.Add(current.ToArray());
-            for (int i = from; i < games.Count; i++)
-            {
-                var g = games[i];
-                if (current.Any(c => store.Leq(c, g) || store.Leq(g, c))) continue;
-                current.Add(g);
-                Extend(i + 1);
-                current.RemoveAt(current.Count - 1);
-            }
-        }
-        Extend(0);
-        return result;
-    }
+    private static List<Game> NextDay(GameStore store, IReadOnlyList<Game> previous) => GamesByDay.NextDay(store, previous);
 
     [Fact]
     public void GamesBornByDaysZeroToThreeNumber1_4_22_1474()
