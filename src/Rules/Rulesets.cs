@@ -5,7 +5,7 @@ public static class Rulesets
 {
     private static readonly IRuleset[] s_all =
     [
-        // new Hackenbush.HackenbushRuleset(),
+        new Hackenbush.HackenbushRuleset(),
         new Domineering.DomineeringRuleset(),
         new Forms.FormsRuleset(),
     ];

@@ -1,0 +1,194 @@
+using Bramble.Rules;
+using Bramble.Values;
+
+namespace Bramble.Search;
+
+/// <summary>
+/// Decomposition search. The components' exact values come first (memoised, each within a node
+/// cap); the decision is then taken on the sum of canonical values by <see cref="SumSearch"/>, or,
+/// when some component is too large for an exact value, by <see cref="LargeSearch"/>, which plays
+/// real moves in the large components and canonical options in the rest. Among the real moves the
+/// player picks one after which the opponent, moving first, loses.
+/// <para>
+/// In a lost position it plays the move that leaves the opponent the fewest winning replies
+/// (counted over the opponent's real moves), ties going to the move Thermostrat ranks highest.
+/// Past its budget it answers with Thermostrat's move and reports <c>Exact = false</c>.
+/// </para>
+/// </summary>
+public sealed class PerfectPlayer : IPlayer
+{
+    private readonly LocalValues _values;
+    private readonly SumSearch _sums;
+    private readonly LargeSearch _large;
+    private readonly TemperatureStrategy _fallback;
+
+    public PerfectPlayer(PerfectSettings? settings = null, ValueContext? context = null)
+    {
+        Settings = settings ?? new PerfectSettings();
+        Context = context ?? new ValueContext();
+        _values = new LocalValues(Context);
+        _sums = new SumSearch(Context.Store);
+        _large = new LargeSearch(_sums, _values) { PieceCap = Settings.PieceCap };
+        _fallback = new TemperatureStrategy(new ThermalReader(_values));
+    }
+
+    public string Name => "perfect";
+    public PerfectSettings Settings { get; }
+
+    /// <summary>The player's own value context (a database file may be loaded into it before play).</summary>
+    public ValueContext Context { get; }
+
+    public Decision Choose(IPosition position, Side side, TimeSpan budget, CancellationToken halt = default)
+    {
+        var b = new SearchBudget(budget, halt, Settings.NodeCap);
+        _sums.Budget = b;
+        _large.Budget = b;
+        if (position.Moves(side).Count == 0)
+            return new Decision(null, 0, b.ElapsedMs, Exact: true, Value: TryValueText(position, b), Winning: false);
+
+        IReadOnlyList<ValuedComponent> components;
+        List<Candidate> candidates;
+        try
+        {
+            components = _large.Value(position.Components(), Settings.ComponentCap);
+            candidates = Candidates(components, side);
+            foreach (var c in candidates)
+            {
+                var child = _large.Split(c.After(_large, side));
+                if (!_large.Wins(child, side.Other()))
+                    return Exact(position, c.Move, b, components, winning: true);
+            }
+        }
+        catch (BudgetExceededException)
+        {
+            return Fallback(position, side, b);
+        }
+        return Lost(position, side, b, components, candidates);
+    }
+
+    /// <summary>
+    /// In a lost position: the move after which the opponent has the fewest winning replies. When
+    /// the count itself runs out of budget, Thermostrat's move; the loss is exact either way.
+    /// </summary>
+    private Decision Lost(IPosition position, Side side, SearchBudget b, IReadOnlyList<ValuedComponent> components, List<Candidate> candidates)
+    {
+        var other = side.Other();
+        IReadOnlyList<Move> ranking;
+        try
+        {
+            ranking = _fallback.Rank(position, side, b);
+        }
+        catch (BudgetExceededException)
+        {
+            ranking = [];
+        }
+        Move? best = null;
+        int fewest = int.MaxValue;
+        int bestRank = int.MaxValue;
+        try
+        {
+            foreach (var c in candidates)
+            {
+                var after = c.After(_large, side);
+                int winning = 0;
+                foreach (var reply in Candidates(after, other))
+                    if (!_large.Wins(_large.Split(reply.After(_large, other)), side)) winning++;
+                int rank = IndexOf(ranking, c.Move);
+                if (winning < fewest || (winning == fewest && rank < bestRank))
+                {
+                    fewest = winning;
+                    bestRank = rank;
+                    best = c.Move;
+                }
+            }
+        }
+        catch (BudgetExceededException)
+        {
+            best = ranking.Count > 0 ? ranking[0] : candidates[0].Move;
+        }
+        return Exact(position, best!.Value, b, components, winning: false);
+    }
+
+    private static int IndexOf(IReadOnlyList<Move> ranking, Move move)
+    {
+        for (int i = 0; i < ranking.Count; i++) if (ranking[i] == move) return i;
+        return int.MaxValue - 1;
+    }
+
+    private Decision Exact(IPosition position, Move move, SearchBudget b, IReadOnlyList<ValuedComponent> components, bool winning) =>
+        new(move, b.Nodes, b.ElapsedMs, Exact: true, Value: ValueText(components), Winning: winning, Line: [position.FormatMove(move)]);
+
+    private Decision Fallback(IPosition position, Side side, SearchBudget spent)
+    {
+        // The fallback gets a small budget of its own: it reads thermographs from values already
+        // found, and estimates the rest shallowly.
+        var b = new SearchBudget(TimeSpan.FromMilliseconds(Math.Max(200, spent.ElapsedMs / 10)));
+        Move? move;
+        try
+        {
+            move = _fallback.Choose(position, side, TemperatureRule.Thermostrat, b).Move;
+        }
+        catch (BudgetExceededException)
+        {
+            move = null;
+        }
+        move ??= position.Moves(side)[0];
+        return new Decision(move, spent.Nodes + b.Nodes, spent.ElapsedMs + b.ElapsedMs, Exact: false,
+            Line: [position.FormatMove(move.Value)]);
+    }
+
+    /// <summary>The value as notation: the canonical values of the components, summed where the sum is small.</summary>
+    private string? ValueText(IReadOnlyList<ValuedComponent> components)
+    {
+        if (components.Any(c => c.Value is null)) return null;
+        var store = Context.Store;
+        var (key, offset) = _sums.Normalise(components.Select(c => c.Value!.Value));
+        var terms = key.Games.Select(g => store.Format(g)).ToList();
+        if (!offset.IsZero || terms.Count == 0) terms.Add(store.Format(store.Number(offset)));
+        return string.Join(" + ", terms);
+    }
+
+    private string? TryValueText(IPosition position, SearchBudget b)
+    {
+        try
+        {
+            return ValueText(_large.Value(position.Components(), Settings.ComponentCap));
+        }
+        catch (BudgetExceededException)
+        {
+            return null;
+        }
+    }
+
+    /// <summary>The real moves of a side, hottest components first (large ones after the small), equal components once.</summary>
+    private List<Candidate> Candidates(IReadOnlyList<ValuedComponent> components, Side side)
+    {
+        var store = Context.Store;
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        var list = new List<(Candidate C, int Group, Dyadic Heat)>();
+        for (int i = 0; i < components.Count; i++)
+        {
+            var comp = components[i];
+            if (!seen.Add(comp.Position.NormalKey)) continue;
+            var heat = comp.Value is { } v ? store.Temperature(v) : Dyadic.Zero;
+            foreach (var m in comp.Position.Moves(side))
+                list.Add((new Candidate(components, i, m), comp.Value is null ? 1 : 0, heat));
+        }
+        list.Sort((p, q) => p.Group != q.Group ? p.Group.CompareTo(q.Group) : q.Heat.CompareTo(p.Heat));
+        return list.ConvertAll(x => x.C);
+    }
+
+    /// <summary>A real move in one component of a valued position.</summary>
+    private sealed record Candidate(IReadOnlyList<ValuedComponent> Components, int Index, Move Move)
+    {
+        /// <summary>The valued components after the move: the moved-in one replaced by its pieces.</summary>
+        public IReadOnlyList<ValuedComponent> After(LargeSearch large, Side side)
+        {
+            var pieces = Components[Index].Position.Play(side, Move).Components();
+            var result = new List<ValuedComponent>(Components.Count + pieces.Count);
+            for (int i = 0; i < Components.Count; i++) if (i != Index) result.Add(Components[i]);
+            result.AddRange(large.Value(pieces, large.PieceCap));
+            return result;
+        }
+    }
+}

@@ -1,0 +1,72 @@
+using Bramble.Rules;
+using Bramble.Values;
+
+namespace Bramble.Search;
+
+/// <summary>
+/// Hotstrat, Thermostrat or Sentestrat as a player. Each instance owns its value context. For
+/// Sentestrat it remembers the components it left after its own last move and the ambient
+/// temperature then, to recognise the opponent's threats on the next call.
+/// </summary>
+public sealed class TemperaturePlayer : IPlayer
+{
+    private readonly TemperatureStrategy _strategy;
+    private (HashSet<string> Texts, Dyadic Ambient, Side Side)? _left;
+
+    public TemperaturePlayer(TemperatureRule rule, ValueContext? context = null)
+    {
+        Rule = rule;
+        Context = context ?? new ValueContext();
+        _strategy = new TemperatureStrategy(new ThermalReader(new LocalValues(Context)));
+    }
+
+    public TemperatureRule Rule { get; }
+    public ValueContext Context { get; }
+
+    public string Name => Rule.ToString().ToLowerInvariant();
+
+    /// <summary>Texts of the components whose thermographs were estimated in the last decision.</summary>
+    public IReadOnlyList<string> LastEstimates { get; private set; } = [];
+
+    public Decision Choose(IPosition position, Side side, TimeSpan budget, CancellationToken halt = default)
+    {
+        var b = new SearchBudget(budget, halt);
+        (IReadOnlySet<string>, Dyadic)? threat = null;
+        if (Rule == TemperatureRule.Sentestrat && _left is { } before && before.Side == side)
+        {
+            // Components present now but not in the position this player left were made by the opponent's move.
+            var created = new HashSet<string>(position.Components().Select(c => c.Text), StringComparer.Ordinal);
+            created.ExceptWith(before.Texts);
+            threat = (created, before.Ambient);
+        }
+        TemperatureStrategy.Choice choice;
+        try
+        {
+            choice = _strategy.Choose(position, side, Rule, b, threat);
+        }
+        catch (BudgetExceededException)
+        {
+            // Out of time before every component was read: any legal move beats none.
+            var moves = position.Moves(side);
+            return new Decision(moves.Count > 0 ? moves[0] : null, b.Nodes, b.ElapsedMs, Exact: false);
+        }
+        LastEstimates = choice.Readings.Where(r => r.Estimated).Select(r => r.Position.Text).ToList();
+        if (Rule == TemperatureRule.Sentestrat && choice.Move is { } played) Remember(position.Play(side, played), side, b);
+        var line = choice.Move is { } m ? new[] { position.FormatMove(m) } : [];
+        return new Decision(choice.Move, b.Nodes, b.ElapsedMs, Exact: false, Line: line);
+    }
+
+    private void Remember(IPosition after, Side side, SearchBudget budget)
+    {
+        try
+        {
+            var readings = _strategy.ReadAll(after, budget);
+            var ambient = new Compound(readings.Select(r => r.Thermograph).ToList()).Ambient;
+            _left = (new HashSet<string>(readings.Select(r => r.Position.Text), StringComparer.Ordinal), ambient, side);
+        }
+        catch (BudgetExceededException)
+        {
+            _left = null;
+        }
+    }
+}

@@ -1,0 +1,136 @@
+using Bramble.Rules;
+using Bramble.Search.Tests.Support;
+using Bramble.Values;
+
+namespace Bramble.Search.Tests;
+
+/// <summary>
+/// Perfect play on sums of random explicit game trees, checked against plain brute-force search
+/// (tests/Search.Tests/Support/BruteForce.cs) — common practice: every shortcut against plain search.
+/// </summary>
+public class PerfectOnTreesTests
+{
+    private static readonly TimeSpan Plenty = TimeSpan.FromMinutes(1);
+
+    private static IEnumerable<TreePosition> RandomSums(int seed, int count, int maxParts, int maxDepth)
+    {
+        var rnd = new Random(seed);
+        for (int i = 0; i < count; i++)
+        {
+            var trees = new Trees();
+            int parts = rnd.Next(1, maxParts + 1);
+            yield return trees.Sum(Enumerable.Range(0, parts).Select(_ => trees.Random(rnd, rnd.Next(1, maxDepth + 1))).ToArray());
+        }
+    }
+
+    private static void CheckAgainstBruteForce(IPlayer player, TreePosition position)
+    {
+        var brute = new BruteForce();
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            var d = player.Choose(position, side, Plenty);
+            bool wins = brute.Wins(position, side);
+            Assert.True(d.Exact, $"{player.Name} did not finish on {position.Text}");
+            Assert.True(d.Winning == wins, $"{player.Name} says {side.Word()} first {(d.Winning == true ? "wins" : "loses")} {position.Text}; brute force disagrees");
+            if (position.Moves(side).Count == 0)
+            {
+                Assert.Null(d.Move);
+                continue;
+            }
+            Assert.NotNull(d.Move);
+            if (wins)
+                Assert.False(brute.Wins(position.Play(side, d.Move!.Value), side.Other()), $"{player.Name}'s move {position.FormatMove(d.Move!.Value)} in {position.Text} does not win");
+        }
+    }
+
+    [Fact]
+    public void PerfectAgreesWithBruteForceOnRandomTreeSums()
+    {
+        var perfect = new PerfectPlayer();
+        foreach (var position in RandomSums(seed: 501, count: 1500, maxParts: 4, maxDepth: 3))
+            CheckAgainstBruteForce(perfect, position);
+    }
+
+    [Fact]
+    public void AlphaBetaAgreesWithBruteForceOnRandomTreeSums()
+    {
+        // A fresh player per position: tree node ids (and so hashes) repeat between test positions.
+        foreach (var position in RandomSums(seed: 502, count: 800, maxParts: 4, maxDepth: 3))
+            CheckAgainstBruteForce(new AlphaBetaPlayer(log2TableSize: 14), position);
+    }
+
+    [Theory]
+    [InlineData(1, 1)]
+    [InlineData(3, 2)]
+    [InlineData(12, 6)]
+    public void PerfectWithLargeComponentsAgreesWithBruteForce(long componentCap, long pieceCap)
+    {
+        // Tiny node caps make most components "too large", so the search of large components
+        // (real moves there, canonical options in the rest) decides instead of the sum alone.
+        foreach (var position in RandomSums(seed: 503 + (int)componentCap, count: 300, maxParts: 3, maxDepth: 3))
+            CheckAgainstBruteForce(new PerfectPlayer(new PerfectSettings { ComponentCap = componentCap, PieceCap = pieceCap }), position);
+    }
+
+    [Fact]
+    public void InALostPositionPerfectLeavesTheFewestWinningReplies()
+    {
+        var perfect = new PerfectPlayer();
+        int lost = 0;
+        foreach (var position in RandomSums(seed: 504, count: 600, maxParts: 3, maxDepth: 3))
+        {
+            var brute = new BruteForce();
+            foreach (var side in new[] { Side.Left, Side.Right })
+            {
+                if (position.Moves(side).Count == 0 || brute.Wins(position, side)) continue;
+                lost++;
+                var d = perfect.Choose(position, side, Plenty);
+                Assert.True(d.Exact);
+                Assert.False(d.Winning);
+                int fewest = position.Moves(side).Min(m => brute.WinningMoves(position.Play(side, m), side.Other()));
+                // docs/players.md: the rule for lost positions (derived from the definitions of the rule itself).
+                Assert.Equal(fewest, brute.WinningMoves(position.Play(side, d.Move!.Value), side.Other()));
+            }
+        }
+        Assert.True(lost > 50, $"only {lost} lost positions were generated");
+    }
+
+    [Fact]
+    public void PerfectReportsTheValueOfASumOfSwitches()
+    {
+        var trees = new Trees();
+        var position = trees.Sum(trees.Switch(4, 0), trees.Switch(1, 0), trees.Integer(2));
+        var d = new PerfectPlayer().Choose(position, Side.Left, Plenty);
+        Assert.True(d.Exact);
+        Assert.True(d.Winning);
+        // {4|0} + {1|0} + 2 is kept as its hot parts plus the number: derived from the definitions.
+        var store = new GameStore();
+        var expected = store.Sum([store.Parse("{4|0}"), store.Parse("{1|0}"), store.Integer(2)]);
+        Assert.Equal(expected, store.Sum(d.Value!.Split(" + ").Select(store.Parse)));
+        // Left's winning move is in the hotter switch {4|0}: derived from the definitions (4 + 0 + 2 wins, 1 + ... is met by Right's 0).
+        Assert.Equal(position.Nodes[0].Id, d.Move!.Value.A);
+    }
+
+    [Fact]
+    public void AsideWithNoMoveGetsNoMoveAndLoses()
+    {
+        var trees = new Trees();
+        var position = trees.Sum(trees.Integer(3));
+        var d = new PerfectPlayer().Choose(position, Side.Right, Plenty);
+        Assert.Null(d.Move);
+        Assert.False(d.Winning);
+        Assert.True(d.Exact);
+    }
+
+    [Fact]
+    public void PastItsBudgetPerfectFallsBackAndSaysSo()
+    {
+        var trees = new Trees();
+        var rnd = new Random(7);
+        var position = trees.Sum(Enumerable.Range(0, 6).Select(_ => trees.Random(rnd, 4)).ToArray());
+        var player = new PerfectPlayer(new PerfectSettings { NodeCap = 3 });
+        var d = player.Choose(position, Side.Left, Plenty);
+        Assert.False(d.Exact);
+        Assert.NotNull(d.Move);
+        Assert.Contains(d.Move!.Value, position.Moves(Side.Left));
+    }
+}
