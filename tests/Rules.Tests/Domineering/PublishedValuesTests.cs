@@ -101,4 +101,16 @@ public class PublishedValuesTests
         // Source: Uiterwijk, CGW 2013, as above, read on the transposed board.
         Assert.Equal(winner.Other(), S.OutcomeOf(value).WinnerMovingFirst(Side.Right));
     }
+
+    [Fact]
+    public void NoRegionOfAtMostTenCellsIsHotterThanTwo()
+    {
+        foreach (var region in _rules.ComponentsUpTo(10)) _rules.Value(region, _context);
+        // [from memory] OEIS A000105: 1 + 2 + 5 + 12 + 35 + 108 + 369 + 1285 + 4655 = 6472 free polyominoes of 2 to 10 cells.
+        Assert.Equal(6472, _context.Memo.Count);
+        var hottest = _context.Memo.Values.Distinct().Max(g => S.Temperature(g));
+        // Source: Uiterwijk & Barton, "New results for Domineering from combinatorial game theory endgame
+        // databases", Theoretical Computer Science (2015): no single region of at most 15 cells is hotter than 2.
+        Assert.True(hottest <= Dyadic.FromInteger(2), $"hottest region has temperature {hottest}");
+    }
 }
