@@ -23,6 +23,7 @@ public static class Entry
         root.Subcommands.Add(ValueVerb.Build());
         root.Subcommands.Add(DrawVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
+        root.Subcommands.Add(SolveVerb.Build());
 
         var parse = root.Parse(args);
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
