@@ -22,13 +22,24 @@ public static class Entry
         // One line per verb; each verb lives in Verbs/<Name>Verb.cs.
         root.Subcommands.Add(ValueVerb.Build());
         root.Subcommands.Add(DrawVerb.Build());
+        root.Subcommands.Add(PlayVerb.Build());
+        root.Subcommands.Add(BenchVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
         root.Subcommands.Add(SolveVerb.Build());
+        root.Subcommands.Add(MatchVerb.Build());
+        root.Subcommands.Add(EngineVerb.Build());
 
         var parse = root.Parse(args);
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
         try
         {
+            if (parse.Errors.Count > 0 && !IsHelpOrVersion(args))
+            {
+                // Bad command-line words are bad input: say what is wrong on stderr and exit 2.
+                foreach (var error in parse.Errors) Console.Error.WriteLine(error.Message);
+                Console.Error.WriteLine("see 'bramble --help' (or 'bramble <verb> --help')");
+                return BadInput;
+            }
             return parse.Invoke();
         }
         finally
@@ -36,6 +47,8 @@ public static class Entry
             Log.CloseAndFlush();
         }
     }
+
+    private static bool IsHelpOrVersion(string[] args) => args.Any(a => a is "--help" or "-h" or "-?" or "--version");
 
     private static void SetUpLogging(FileInfo? file, bool verbose)
     {

@@ -5,9 +5,9 @@ public static class Rulesets
 {
     private static readonly IRuleset[] s_all =
     [
-        // new Hackenbush.HackenbushRuleset(),
+        new Hackenbush.HackenbushRuleset(),
         new Domineering.DomineeringRuleset(),
-        // new Forms.FormsRuleset(),
+        new Forms.FormsRuleset(),
     ];
 
     public static IReadOnlyList<IRuleset> All => s_all;

@@ -13,10 +13,6 @@ namespace Bramble.Cli;
 /// </summary>
 public static class DbVerb
 {
-    /// <summary>The <c>--db FILE</c> option that value, solve, engine and match share (load with <see cref="ComponentDatabase.Load"/>, save with <see cref="ComponentDatabase.Save"/>).</summary>
-    public static Option<FileInfo?> CreateDbOption() =>
-        new("--db") { Description = "A component-value database: read at the start, new values written back at the end" };
-
     public static Command Build()
     {
         var command = new Command("db", "Component-value databases: precompute one, or show what one holds");
@@ -31,7 +27,7 @@ public static class DbVerb
         var cells = new Option<int>("--cells") { Description = "Largest component size to precompute (cells, or edges for hackenbush)", Required = true };
         var output = new Option<FileInfo>("--out") { Description = "Database file to write (merged with it when it already is one)", Required = true };
         var command = new Command("build", "Precompute the values of every component up to a size") { ruleset, cells, output };
-        command.SetAction(parse => RunBuild(parse.GetValue(ruleset)!, parse.GetValue(cells), parse.GetValue(output)!));
+        command.SetAction(parse => Failures.Guard(() => RunBuild(parse.GetValue(ruleset)!, parse.GetValue(cells), parse.GetValue(output)!)));
         return command;
     }
 
@@ -39,7 +35,7 @@ public static class DbVerb
     {
         var file = new Argument<FileInfo>("file") { Description = "A database file" };
         var command = new Command("info", "Say what a database file holds") { file };
-        command.SetAction(parse => RunInfo(parse.GetValue(file)!));
+        command.SetAction(parse => Failures.Guard(() => RunInfo(parse.GetValue(file)!)));
         return command;
     }
 

@@ -26,9 +26,11 @@ public sealed class EngineHost
     private Side? _lastMover;
     private IPlayer? _player;
     private Thinking? _thinking;
+    private ThinkWorker? _worker;
     private long _haltMark;
     private ValueContext? _values;
     private LineWriter _out = null!;
+    private int _served;
 
     public EngineHost(EngineSetup? setup = null)
     {
@@ -40,6 +42,7 @@ public sealed class EngineHost
     /// <summary>Serves <paramref name="input"/> until <c>bye</c> or its end; returns the exit status (0).</summary>
     public int Serve(Stream input, Stream output)
     {
+        if (Interlocked.Exchange(ref _served, 1) != 0) throw new InvalidOperationException("an engine host serves one session; make a new one");
         _out = new LineWriter(output);
         _log.Information("engine {Name} {Version} serving twine/1 with strategy {Strategy}", _setup.Name, _setup.Version, _settings.Strategy);
         // Lines are read on their own thread so a halt is seen even while requests queue behind a think.
@@ -54,6 +57,7 @@ public sealed class EngineHost
         {
             // The reading thread may still wait on input nobody will send; let it drop what it reads.
             queue.CompleteAdding();
+            _worker?.Dispose();
         }
     }
 
@@ -269,7 +273,7 @@ public sealed class EngineHost
         _log.Debug("think {Side} with {Budget} ms", think.Side.Word(), budget.TotalMilliseconds);
         var thinking = new Thinking(index, _player, _position, think.Side, budget, _setup.Grace, _out, _log);
         Interlocked.Exchange(ref _thinking, thinking);
-        thinking.Start();
+        thinking.Start(_worker ??= new ThinkWorker());
         if (Interlocked.Read(ref _haltMark) > index) thinking.Halt();
     }
 
@@ -309,7 +313,13 @@ public sealed class EngineHost
         if (_thinking is not { } thinking) return;
         if (halt) thinking.Halt();
         thinking.Wait();
-        if (thinking.Abandoned) _player = null; // its thread may still run; the next think gets a fresh player
+        if (thinking.Abandoned)
+        {
+            // Its thread is still busy with the stuck player: the next think gets a fresh player and thread.
+            _player = null;
+            _worker?.Dispose();
+            _worker = null;
+        }
         thinking.Dispose();
         Interlocked.Exchange(ref _thinking, null);
     }

@@ -7,7 +7,7 @@ using Serilog;
 namespace Bramble.Wire;
 
 /// <summary>
-/// One pending <c>think</c>: the player runs on its own thread so the host can go on reading
+/// One pending <c>think</c>: the player runs on the worker thread so the host can go on reading
 /// (and see <c>halt</c>), and exactly one answer is written — the player's, or the host's fallback
 /// when the player overruns its budget by the grace period or ignores a halt for that long.
 /// </summary>
@@ -45,14 +45,12 @@ internal sealed class Thinking : IDisposable
     /// <summary>True when the host had to answer for the player; its thread may still be running, so it must not be used again.</summary>
     public bool Abandoned { get; private set; }
 
-    public void Start()
+    public void Start(ThinkWorker worker)
     {
         _clock.Start();
         _overrun = new Timer(_ => { _log.Warning("{Player} overran its budget of {Budget} ms; halting it", _player.Name, _budget.TotalMilliseconds); Halt(); },
             null, _budget + _grace, Timeout.InfiniteTimeSpan);
-        // Players recurse as deep as the game tree, so they get the big stack too.
-        var thread = new Thread(Run, BigStack.DefaultBytes) { IsBackground = true, Name = "think" };
-        thread.Start();
+        worker.Run(Run);
     }
 
     /// <summary>Asks the player to stop now; if it has not answered within the grace period, the host answers.</summary>

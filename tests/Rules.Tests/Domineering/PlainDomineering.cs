@@ -6,51 +6,43 @@ namespace Bramble.Rules.Tests.Domineering;
 /// Plain search for the tests, written apart from the code under test: a board is a grid of
 /// bools, a position's value is {values after each vertical domino | after each horizontal one}
 /// over the whole board at once (no splitting, no symmetry), memoised only by the exact set of
-/// empty cells.
+/// empty cells (one bit per cell of a board of at most 64 cells).
 /// </summary>
 public sealed class PlainDomineering(GameStore store)
 {
-    private readonly Dictionary<string, Game> _seen = new();
+    private readonly Dictionary<(ulong Empty, int Rows, int Columns), Game> _seen = new();
 
+    /// <summary>The value of a board of at most 64 cells.</summary>
     public Game Value(bool[,] empty)
     {
-        string key = Key(empty);
-        if (_seen.TryGetValue(key, out var known)) return known;
         int rows = empty.GetLength(0), columns = empty.GetLength(1);
+        if (rows * columns > 64) throw new ArgumentException("plain search takes boards of at most 64 cells");
+        ulong bits = 0;
+        for (int r = 0; r < rows; r++)
+            for (int c = 0; c < columns; c++)
+                if (empty[r, c]) bits |= 1UL << (r * columns + c);
+        return Value(bits, rows, columns);
+    }
+
+    private Game Value(ulong empty, int rows, int columns)
+    {
+        if (_seen.TryGetValue((empty, rows, columns), out var known)) return known;
         var left = new List<Game>();
         var right = new List<Game>();
         for (int r = 0; r < rows; r++)
         {
             for (int c = 0; c < columns; c++)
             {
-                if (!empty[r, c]) continue;
-                if (r + 1 < rows && empty[r + 1, c]) left.Add(After(empty, r, c, r + 1, c));
-                if (c + 1 < columns && empty[r, c + 1]) right.Add(After(empty, r, c, r, c + 1));
+                ulong here = 1UL << (r * columns + c);
+                if ((empty & here) == 0) continue;
+                ulong below = here << columns, beside = here << 1;
+                if (r + 1 < rows && (empty & below) != 0) left.Add(Value(empty & ~here & ~below, rows, columns));
+                if (c + 1 < columns && (empty & beside) != 0) right.Add(Value(empty & ~here & ~beside, rows, columns));
             }
         }
         var value = store.Make(left, right);
-        _seen[key] = value;
+        _seen[(empty, rows, columns)] = value;
         return value;
-    }
-
-    private Game After(bool[,] empty, int r1, int c1, int r2, int c2)
-    {
-        var next = (bool[,])empty.Clone();
-        next[r1, c1] = false;
-        next[r2, c2] = false;
-        return Value(next);
-    }
-
-    private static string Key(bool[,] empty)
-    {
-        var chars = new char[empty.Length + empty.GetLength(0)];
-        int k = 0;
-        for (int r = 0; r < empty.GetLength(0); r++)
-        {
-            for (int c = 0; c < empty.GetLength(1); c++) chars[k++] = empty[r, c] ? '.' : '#';
-            chars[k++] = '/';
-        }
-        return new string(chars);
     }
 
     // ------------------------------------------------------------ boards as text, for the tests

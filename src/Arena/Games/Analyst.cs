@@ -1,0 +1,102 @@
+using System.Diagnostics;
+using Bramble.Arena.Journal;
+using Bramble.Rules;
+using Bramble.Values;
+using Serilog;
+
+namespace Bramble.Arena.Games;
+
+/// <summary>What exact analysis says about a finished game.</summary>
+/// <param name="Theory">Who wins the start position with perfect play, given who moves first; null when out of budget.</param>
+/// <param name="Analysed">How many plies, from the first, analysis could judge.</param>
+public sealed record GameReview(Side? Theory, IReadOnlyList<Blunder> Blunders, int Analysed);
+
+/// <summary>
+/// Exact analysis for the referee, in-process and within a budget: the canonical value v of a
+/// position (the ruleset's exact value, memoised by component) tells who wins with a given side to
+/// move — the winner moving first for the outcome class of v. Running out of budget means "not
+/// known", never a guess. One analyst per game worker: the value store behind it is not
+/// thread-safe, and keeping it from game to game lets the memo of component values pay off.
+/// </summary>
+public sealed class Analyst(ILogger log)
+{
+    private const int StoreLimit = 2_000_000;
+    private ValueContext _context = new();
+    private readonly HashSet<string> _warned = new(StringComparer.Ordinal);
+
+    /// <summary>The winner of <paramref name="position"/> with <paramref name="mover"/> to move, or null when not known within the budget.</summary>
+    public Side? Winner(IPosition position, Side mover, long budgetMs)
+    {
+        var value = Value(position, budgetMs);
+        return value is { } v ? _context.Store.OutcomeOf(v).WinnerMovingFirst(mover) : null;
+    }
+
+    /// <summary>
+    /// For <c>adjudicate: numbers</c>: when every component is a number the sum x is a number, and
+    /// the game is over in all but name (x &gt; 0 Left wins, x &lt; 0 Right, x = 0 the side not to move).
+    /// Null when some component is not a number or the budget ran out.
+    /// </summary>
+    public Side? NumbersWinner(IPosition position, Side mover, long budgetMs)
+    {
+        var clock = Stopwatch.StartNew();
+        foreach (var component in position.Components())
+        {
+            var value = Value(component, budgetMs - clock.ElapsedMilliseconds);
+            if (value is not { } v || !_context.Store.IsNumber(v)) return null;
+        }
+        return Winner(position, mover, budgetMs - clock.ElapsedMilliseconds);
+    }
+
+    /// <summary>
+    /// Theory and blunders for the positions of a game (start position first, one more after each
+    /// move, movers alternating from <paramref name="first"/>): the mover at ply k blundered when it
+    /// could win the position before its move and cannot win the one after. Plies are judged from
+    /// the first on until the budget (for the whole game) runs out.
+    /// </summary>
+    public GameReview Review(IReadOnlyList<IPosition> positions, Side first, string left, string right, long budgetMs)
+    {
+        if (budgetMs <= 0 || positions.Count == 0) return new GameReview(null, [], 0);
+        var clock = Stopwatch.StartNew();
+        var winners = new List<Side>();
+        var mover = first;
+        foreach (var position in positions)
+        {
+            if (Winner(position, mover, budgetMs - clock.ElapsedMilliseconds) is not { } winner) break;
+            winners.Add(winner);
+            mover = mover.Other();
+        }
+        if (winners.Count == 0) return new GameReview(null, [], 0);
+        var blunders = new List<Blunder>();
+        mover = first;
+        for (var ply = 1; ply < winners.Count; ply++)
+        {
+            if (winners[ply - 1] == mover && winners[ply] != mover)
+                blunders.Add(new Blunder(ply, mover == Side.Left ? left : right));
+            mover = mover.Other();
+        }
+        return new GameReview(winners[0], blunders, winners.Count - 1);
+    }
+
+    private Game? Value(IPosition position, long budgetMs)
+    {
+        if (budgetMs <= 0) return null;
+        if (_context.Store.Count > StoreLimit) _context = new ValueContext();
+        _context.ResetCounters(budgetMs);
+        try
+        {
+            return position.Ruleset.Value(position, _context);
+        }
+        catch (BudgetExceededException)
+        {
+            return null;
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            // Analysis is a service to the standings, never a reason to stop a match.
+            lock (_warned)
+                if (_warned.Add(position.Ruleset.Name + e.GetType().Name))
+                    log.Warning("Exact analysis of {Ruleset} positions failed ({Error}); theory and blunders stay unknown for them", position.Ruleset.Name, e.Message);
+            return null;
+        }
+    }
+}

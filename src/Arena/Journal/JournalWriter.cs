@@ -1,0 +1,57 @@
+using System.Text;
+
+namespace Bramble.Arena.Journal;
+
+/// <summary>
+/// Appends game records, one line each, written in a single call and flushed to the disk before
+/// the harness moves on, so a game that was reported finished survives a crash or a kill -9.
+/// Thread-safe: parallel games finish at the same time.
+/// </summary>
+public sealed class JournalWriter : IDisposable
+{
+    private readonly FileStream _stream;
+    private readonly Lock _gate = new();
+
+    private JournalWriter(FileStream stream) => _stream = stream;
+
+    public string Path => _stream.Name;
+
+    /// <summary>
+    /// Opens for appending after <paramref name="contents"/> (from <see cref="JournalFile.Read"/>):
+    /// an ignored incomplete last line is cut off first, a missing last newline is added.
+    /// </summary>
+    public static JournalWriter Open(string path, JournalContents contents)
+    {
+        var folder = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(path));
+        if (!string.IsNullOrEmpty(folder)) Directory.CreateDirectory(folder);
+        var stream = new FileStream(path, FileMode.OpenOrCreate, FileAccess.ReadWrite, FileShare.Read);
+        try
+        {
+            if (stream.Length > contents.ValidBytes) stream.SetLength(contents.ValidBytes);
+            stream.Seek(0, SeekOrigin.End);
+            if (contents.NeedsNewline) stream.WriteByte((byte)'\n');
+            stream.Flush(flushToDisk: true);
+        }
+        catch
+        {
+            stream.Dispose();
+            throw;
+        }
+        return new JournalWriter(stream);
+    }
+
+    public void Append(GameRecord record)
+    {
+        var bytes = Encoding.UTF8.GetBytes(JournalFormat.Write(record) + "\n");
+        lock (_gate)
+        {
+            _stream.Write(bytes);
+            _stream.Flush(flushToDisk: true);
+        }
+    }
+
+    public void Dispose()
+    {
+        lock (_gate) _stream.Dispose();
+    }
+}

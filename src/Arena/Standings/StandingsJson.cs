@@ -1,0 +1,79 @@
+using System.Buffers;
+using System.Text;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using Bramble.Arena.Statistics;
+
+namespace Bramble.Arena.Standings;
+
+/// <summary>
+/// The standings as JSON (<c>--json</c>): <c>{"title","games","players":[{"id","games","wins",
+/// "losses","score","elo","elo_low","elo_high","elo_model","forfeits","blunders","moves_analysed",
+/// "blunders_per_100"}],"sprt":{…}|null,"notes":[…]}</c>. Infinite Elo values are written as null.
+/// </summary>
+public static class StandingsJson
+{
+    public static string Write(MatchStandings standings, string title, IEnumerable<string> notes)
+    {
+        var buffer = new ArrayBufferWriter<byte>();
+        using (var json = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
+        {
+            json.WriteStartObject();
+            json.WriteString("title", title);
+            json.WriteNumber("games", standings.Games);
+            json.WriteStartArray("players");
+            foreach (var p in standings.Players)
+            {
+                json.WriteStartObject();
+                json.WriteString("id", p.Id);
+                json.WriteNumber("games", p.Games);
+                json.WriteNumber("wins", p.Wins);
+                json.WriteNumber("losses", p.Losses);
+                json.WriteNumber("score", Math.Round(p.Score, 6));
+                Finite(json, "elo", p.Games == 0 ? double.NaN : p.Elo.Delta);
+                Finite(json, "elo_low", p.Games == 0 ? double.NaN : p.Elo.Low);
+                Finite(json, "elo_high", p.Games == 0 ? double.NaN : p.Elo.High);
+                json.WriteString("elo_model", p.Elo.Model.Word());
+                json.WriteNumber("forfeits", p.Forfeits);
+                json.WriteNumber("blunders", p.Blunders);
+                json.WriteNumber("moves_analysed", p.MovesAnalysed);
+                Finite(json, "blunders_per_100", p.BlundersPer100 ?? double.NaN);
+                json.WriteEndObject();
+            }
+            json.WriteEndArray();
+            if (standings.Sprt is { } sprt)
+            {
+                json.WriteStartObject("sprt");
+                json.WriteString("candidate", sprt.Candidate);
+                json.WriteString("baseline", sprt.Baseline);
+                json.WriteNumber("elo0", sprt.Spec.Elo0);
+                json.WriteNumber("elo1", sprt.Spec.Elo1);
+                json.WriteNumber("alpha", sprt.Spec.Alpha);
+                json.WriteNumber("beta", sprt.Spec.Beta);
+                Finite(json, "llr", sprt.Llr);
+                json.WriteNumber("lower", Math.Round(sprt.Bounds.Lower, 6));
+                json.WriteNumber("upper", Math.Round(sprt.Bounds.Upper, 6));
+                json.WriteString("decision", sprt.Decision switch
+                {
+                    SprtDecision.AcceptH0 => "H0",
+                    SprtDecision.AcceptH1 => "H1",
+                    _ => "continue",
+                });
+                json.WriteString("model", sprt.Model.Word());
+                json.WriteEndObject();
+            }
+            else json.WriteNull("sprt");
+            json.WriteStartArray("notes");
+            foreach (var note in notes) json.WriteStringValue(note);
+            json.WriteEndArray();
+            json.WriteEndObject();
+        }
+        return Encoding.UTF8.GetString(buffer.WrittenSpan);
+    }
+
+    private static void Finite(Utf8JsonWriter json, string name, double value)
+    {
+        if (double.IsFinite(value)) json.WriteNumber(name, Math.Round(value, 3));
+        else json.WriteNull(name);
+    }
+}

@@ -1,0 +1,260 @@
+using System.CommandLine;
+using System.Runtime.InteropServices;
+using Bramble.Arena;
+using Bramble.Arena.Journal;
+using Bramble.Arena.Schedule;
+using Bramble.Arena.Spec;
+using Bramble.Arena.Standings;
+using Serilog;
+
+namespace Bramble.Cli;
+
+/// <summary>
+/// <c>bramble match [&lt;spec.json&gt;] [--resume] [--shard K/N] [--parallel N] [--json]</c> and
+/// <c>bramble match merge &lt;journal&gt;… [--json] [--out FILE]</c>. Without a spec it runs the
+/// built-in demo, matches/demo.json, starting afresh each time unless --resume is given.
+/// </summary>
+public static class MatchVerb
+{
+    private const string DemoSpec = "matches/demo.json";
+
+    public static Command Build()
+    {
+        var spec = new Argument<string?>("spec") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
+        var resume = new Option<bool>("--resume") { Description = "Continue the journal, skipping the games it holds" };
+        var shard = new Option<string?>("--shard") { Description = "Play only the games whose id ≡ K (mod N), into a journal of their own" };
+        var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)" };
+        var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
+        var command = new Command("match", "Play a tournament between engines and print the standings (a match file runs the programs it names)")
+        {
+            spec, resume, shard, parallel, json,
+        };
+        command.Subcommands.Add(BuildMerge());
+        command.SetAction(parse => Run(parse.GetValue(spec), parse.GetValue(resume), parse.GetValue(shard), parse.GetValue(parallel), parse.GetValue(json)));
+        return command;
+    }
+
+    private static Command BuildMerge()
+    {
+        var journals = new Argument<string[]>("journals") { Description = "Journals to merge (e.g. the shards of one match)", Arity = ArgumentArity.OneOrMore };
+        var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
+        var output = new Option<string?>("--out") { Description = "Also write the merged journal to this file" };
+        var command = new Command("merge", "Merge shard journals and print the standings") { journals, json, output };
+        command.SetAction(parse => Merge(parse.GetValue(journals) ?? [], parse.GetValue(json), parse.GetValue(output)));
+        return command;
+    }
+
+    private static int Run(string? specPath, bool resume, string? shardText, int? parallel, bool json)
+    {
+        var demo = specPath is null;
+        if (demo)
+        {
+            specPath = FindDemo();
+            if (specPath is null)
+            {
+                Console.Error.WriteLine($"match: the built-in demo {DemoSpec} was not found (run from the repository, or give a spec file)");
+                return Entry.JobFailed;
+            }
+        }
+        var shard = Shard.Whole;
+        if (shardText is not null && !Shard.TryParse(shardText, out shard, out var problem))
+        {
+            Console.Error.WriteLine($"match: --shard {problem}");
+            return Entry.BadInput;
+        }
+        if (parallel is < 1)
+        {
+            Console.Error.WriteLine($"match: --parallel {parallel}: need at least 1");
+            return Entry.BadInput;
+        }
+
+        MatchSpec spec;
+        try
+        {
+            spec = new MatchSpecLoader(RulesetFinders.Registry).Load(specPath!);
+        }
+        catch (MatchSpecException e)
+        {
+            Console.Error.WriteLine(e.Message);
+            return Entry.BadInput;
+        }
+
+        using var cancel = new CancellationTokenSource();
+        ConsoleCancelEventHandler onCancel = (_, e) =>
+        {
+            // The first Ctrl-C stops the match cleanly (engines killed, journal intact); a second one is not intercepted.
+            if (cancel.IsCancellationRequested) return;
+            e.Cancel = true;
+            Console.Error.WriteLine("\nmatch: interrupted; stopping engines");
+            cancel.Cancel();
+        };
+        Console.CancelKeyPress += onCancel;
+        // A cluster scheduler ends a job with SIGTERM (time limit, scancel): treat it like Ctrl-C.
+        using var term = PosixSignalRegistration.Create(PosixSignal.SIGTERM, context =>
+        {
+            context.Cancel = true;
+            cancel.Cancel();
+        });
+        var progress = new ProgressLine(Console.Error, !Console.IsErrorRedirected);
+        var options = new MatchOptions
+        {
+            Resume = resume,
+            Fresh = demo && !resume,
+            Shard = shard,
+            Parallel = parallel,
+            Progress = progress,
+            Log = Log.Logger,
+        };
+        try
+        {
+            Console.Error.WriteLine($"match: {spec.Title}: {spec.Players.Count} players, {spec.Positions.Count} positions{(shard.IsWhole ? "" : $", shard {shard}")}");
+            var report = new MatchRunner(spec, options).RunAsync(cancel.Token).GetAwaiter().GetResult();
+            progress.Finish();
+            foreach (var note in report.Notes) Console.Error.WriteLine($"match: {note}");
+            var title = shard.IsWhole ? spec.Title : $"{spec.Title} (shard {shard})";
+            Console.Out.Write(json ? StandingsJson.Write(report.Standings, title, report.Notes) + "\n" : StandingsText.Table(report.Standings, title));
+            Console.Error.WriteLine($"match: journal {report.JournalPath}");
+            if (report.Stop == MatchStop.Cancelled)
+            {
+                Console.Error.WriteLine($"match: stopped with {report.Records.Count} of {report.Total} games recorded; --resume continues");
+                return Entry.JobFailed;
+            }
+            return Entry.Success;
+        }
+        catch (MatchInputException e)
+        {
+            progress.Finish();
+            Console.Error.WriteLine($"match: {e.Message}");
+            return Entry.BadInput;
+        }
+        catch (MatchJobException e)
+        {
+            progress.Finish();
+            Console.Error.WriteLine($"match: {e.Message}");
+            return Entry.JobFailed;
+        }
+        finally
+        {
+            Console.CancelKeyPress -= onCancel;
+        }
+    }
+
+    private static int Merge(string[] journals, bool json, string? output)
+    {
+        var read = new List<(string, JournalContents)>();
+        foreach (var path in journals)
+        {
+            if (!File.Exists(path))
+            {
+                Console.Error.WriteLine($"match merge: no such journal: {path}");
+                return Entry.BadInput;
+            }
+            try
+            {
+                read.Add((path, JournalFile.Read(path)));
+            }
+            catch (JournalFormatException e)
+            {
+                Console.Error.WriteLine($"match merge: {e.Message}");
+                return Entry.BadInput;
+            }
+        }
+        var merged = JournalMerge.Merge(read);
+        foreach (var note in merged.Notices) Console.Error.WriteLine($"match merge: {note}");
+        if (merged.Conflicts.Count > 0)
+        {
+            foreach (var conflict in merged.Conflicts) Console.Error.WriteLine($"match merge: {conflict}");
+            Console.Error.WriteLine($"match merge: {merged.Conflicts.Count} game{(merged.Conflicts.Count == 1 ? " was" : "s were")} recorded with different results; no standings");
+            return Entry.BadInput;
+        }
+        if (output is not null)
+        {
+            try
+            {
+                File.WriteAllLines(output, merged.Records.Select(JournalFormat.Write));
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                Console.Error.WriteLine($"match merge: cannot write {output}: {e.Message}");
+                return Entry.JobFailed;
+            }
+        }
+        var standings = MatchStandings.Compute(merged.Records);
+        var title = $"merge of {journals.Length} journal{(journals.Length == 1 ? "" : "s")}";
+        Console.Out.Write(json ? StandingsJson.Write(standings, title, merged.Notices) + "\n" : StandingsText.Table(standings, title));
+        return Entry.Success;
+    }
+
+    /// <summary>matches/demo.json from the working folder upward, then from the program's folder upward (a fresh checkout).</summary>
+    private static string? FindDemo()
+    {
+        foreach (var start in new[] { Directory.GetCurrentDirectory(), AppContext.BaseDirectory })
+        {
+            for (var folder = new DirectoryInfo(start); folder is not null; folder = folder.Parent)
+            {
+                var candidate = Path.Combine(folder.FullName, DemoSpec);
+                if (File.Exists(candidate)) return candidate;
+            }
+        }
+        return null;
+    }
+
+    /// <summary>
+    /// The running match's one-line status on stderr: games done/total, games per minute, time left
+    /// and the current leader. On a terminal the line is rewritten in place; into a file or a pipe
+    /// (a cluster job's log) it is written as a new line at most every few seconds and at the end.
+    /// </summary>
+    private sealed class ProgressLine(TextWriter error, bool inPlace) : IProgress<MatchProgress>
+    {
+        private static readonly TimeSpan s_logEvery = TimeSpan.FromSeconds(10);
+        private readonly Lock _gate = new();
+        private DateTime _lastWritten = DateTime.MinValue;
+        private MatchProgress? _last;
+        private int _width;
+        private bool _pending;
+
+        public void Report(MatchProgress value)
+        {
+            lock (_gate)
+            {
+                _last = value;
+                if (inPlace) Write();
+                else if (DateTime.UtcNow - _lastWritten >= s_logEvery || value.Done == value.Total) Write();
+                else _pending = true;
+            }
+        }
+
+        /// <summary>Ends the status line so the table starts on a line of its own.</summary>
+        public void Finish()
+        {
+            lock (_gate)
+            {
+                if (_last is null) return;
+                if (!inPlace && _pending) Write();
+                if (inPlace) error.WriteLine();
+                _last = null;
+            }
+        }
+
+        private void Write()
+        {
+            var line = Format(_last!);
+            if (inPlace)
+            {
+                error.Write("\r" + line.PadRight(_width));
+                _width = Math.Max(_width, line.Length);
+            }
+            else error.WriteLine(line);
+            error.Flush();
+            _lastWritten = DateTime.UtcNow;
+            _pending = false;
+        }
+
+        public static string Format(MatchProgress p)
+        {
+            var left = p.TimeLeft is { } t ? (t.TotalHours >= 1 ? $"{(int)t.TotalHours}h{t.Minutes:00}m" : $"{t.Minutes}m{t.Seconds:00}s") : "?";
+            var leader = p.Leader is { } l ? $"{l.Id} {100 * l.Score:0}%" : "-";
+            return $"games {p.Done}/{p.Total} · {p.GamesPerMinute:0.0}/min · {left} left · leader {leader}";
+        }
+    }
+}

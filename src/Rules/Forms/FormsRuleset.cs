@@ -1,0 +1,49 @@
+using Bramble.Values;
+
+namespace Bramble.Rules.Forms;
+
+/// <summary>
+/// Explicit game forms: a position is a sum of value-notation terms (SPEC.md §2–3), each term a
+/// component whose value is the canonical form of its expression.
+/// </summary>
+public sealed class FormsRuleset : IRuleset
+{
+    public string Name => "forms";
+
+    public IPosition Parse(string text)
+    {
+        IReadOnlyList<(ValueExpr Term, int Column)> terms;
+        try
+        {
+            terms = ValueNotation.ParseTerms(text);
+        }
+        catch (ValueSyntaxException e)
+        {
+            throw new PositionSyntaxException(text, e.Column, e.Expected);
+        }
+        return new FormsPosition(this, terms.Select((t, i) => (i + 1, new FormsTerm(t.Term))).ToArray());
+    }
+
+    public Game Value(IPosition position, ValueContext context)
+    {
+        if (position is not FormsPosition forms)
+            throw new ArgumentException($"not a forms position: {position.Ruleset.Name}", nameof(position));
+        var total = context.Store.Zero;
+        foreach (var (_, term) in forms.Terms)
+        {
+            if (!context.TryGetMemo(this, term.Text, out var value))
+            {
+                context.Tick();
+                value = context.Store.Evaluate(term.Expression);
+                context.SetMemo(this, term.Text, value);
+            }
+            total = context.Store.Add(total, value);
+        }
+        return total;
+    }
+
+    public IReadOnlyList<string> Generators => FormsGenerators.Names;
+
+    public IReadOnlyList<string> Generate(string generator, int count, int size, int seed, string? colours = null) =>
+        FormsGenerators.Generate(generator, count, size, seed);
+}
