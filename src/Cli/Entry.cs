@@ -25,6 +25,7 @@ public static class Entry
         root.Subcommands.Add(PlayVerb.Build());
         root.Subcommands.Add(BenchVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
+        root.Subcommands.Add(SolveVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
 

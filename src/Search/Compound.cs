@@ -76,22 +76,27 @@ public sealed class Compound
             if (p.Temperature.Sign > 0) ts.Add(p.Temperature);
         }
         var basic = ts.ToList();
+        // Widths at every breakpoint, read once: between breakpoints each width is linear.
+        var widths = new Dyadic[_parts.Count][];
+        for (int i = 0; i < _parts.Count; i++)
+        {
+            widths[i] = new Dyadic[basic.Count];
+            for (int s = 0; s < basic.Count; s++) widths[i][s] = Width(i, basic[s]);
+        }
         for (int s = 0; s + 1 < basic.Count; s++)
         {
-            var a = basic[s];
-            var b = basic[s + 1];
-            var span = b - a;
+            var span = basic[s + 1] - basic[s];
             for (int i = 0; i < _parts.Count; i++)
             {
                 for (int j = i + 1; j < _parts.Count; j++)
                 {
-                    var da = Width(i, a) - Width(j, a);
-                    var db = Width(i, b) - Width(j, b);
+                    var da = widths[i][s] - widths[j][s];
+                    var db = widths[i][s + 1] - widths[j][s + 1];
                     if (da.Sign * db.Sign >= 0) continue;
                     // Widths have slopes 0, −1 or −2, so (da − db) is span or 2·span in size: the crossing is dyadic.
                     var q = (da - db).Abs();
                     var step = q == span ? da.Abs() : q == span + span ? da.Abs().Shift(1) : Dyadic.Zero;
-                    if (step.Sign > 0 && step < span) ts.Add(a + step);
+                    if (step.Sign > 0 && step < span) ts.Add(basic[s] + step);
                 }
             }
         }

@@ -13,11 +13,12 @@ public sealed class TemperaturePlayer : IPlayer
     private readonly TemperatureStrategy _strategy;
     private (HashSet<string> Texts, Dyadic Ambient, Side Side)? _left;
 
-    public TemperaturePlayer(TemperatureRule rule, ValueContext? context = null)
+    /// <param name="exactCap">Node cap for a component's exact value; larger components get an estimated thermograph.</param>
+    public TemperaturePlayer(TemperatureRule rule, ValueContext? context = null, long exactCap = 20_000)
     {
         Rule = rule;
         Context = context ?? new ValueContext();
-        _strategy = new TemperatureStrategy(new ThermalReader(new LocalValues(Context)));
+        _strategy = new TemperatureStrategy(new ThermalReader(new LocalValues(Context)) { ExactCap = exactCap });
     }
 
     public TemperatureRule Rule { get; }

@@ -45,9 +45,14 @@ public sealed class TemperatureStrategy(ThermalReader reader)
             readAt = compound.Ambient;
             if (rule == TemperatureRule.Sentestrat && answerIn is { } threat)
             {
-                // A component the opponent just made hotter than the ambient temperature is a threat: answer it.
-                var threats = playable.Where(i => threat.Texts.Contains(readings[i].Position.Text)
-                    && readings[i].Temperature > threat.Ambient).ToList();
+                // The opponent's move is a threat when it left its component hotter than the ambient
+                // temperature of the rest of the board: the hottest component the move did not touch
+                // (and at least the compound's ambient temperature before the move). Answer it.
+                var created = Enumerable.Range(0, readings.Count).Where(i => threat.Texts.Contains(readings[i].Position.Text)).ToList();
+                var ambient = threat.Ambient;
+                for (int i = 0; i < readings.Count; i++)
+                    if (!created.Contains(i) && readings[i].Temperature > ambient) ambient = readings[i].Temperature;
+                var threats = created.Where(i => playable.Contains(i) && readings[i].Temperature > ambient).ToList();
                 if (threats.Count > 0) pick = Hottest(readings, threats);
             }
             if (pick < 0) pick = Widest(readings, playable, compound);

@@ -47,7 +47,7 @@ public class PerfectOnTreesTests
     public void PerfectAgreesWithBruteForceOnRandomTreeSums()
     {
         var perfect = new PerfectPlayer();
-        foreach (var position in RandomSums(seed: 501, count: 1500, maxParts: 4, maxDepth: 3))
+        foreach (var position in RandomSums(seed: 501, count: 1000, maxParts: 4, maxDepth: 3))
             CheckAgainstBruteForce(perfect, position);
     }
 
@@ -55,7 +55,7 @@ public class PerfectOnTreesTests
     public void AlphaBetaAgreesWithBruteForceOnRandomTreeSums()
     {
         // A fresh player per position: tree node ids (and so hashes) repeat between test positions.
-        foreach (var position in RandomSums(seed: 502, count: 800, maxParts: 4, maxDepth: 3))
+        foreach (var position in RandomSums(seed: 502, count: 500, maxParts: 4, maxDepth: 3))
             CheckAgainstBruteForce(new AlphaBetaPlayer(log2TableSize: 14), position);
     }
 
@@ -67,7 +67,7 @@ public class PerfectOnTreesTests
     {
         // Tiny node caps make most components "too large", so the search of large components
         // (real moves there, canonical options in the rest) decides instead of the sum alone.
-        foreach (var position in RandomSums(seed: 503 + (int)componentCap, count: 300, maxParts: 3, maxDepth: 3))
+        foreach (var position in RandomSums(seed: 503 + (int)componentCap, count: 150, maxParts: 3, maxDepth: 3))
             CheckAgainstBruteForce(new PerfectPlayer(new PerfectSettings { ComponentCap = componentCap, PieceCap = pieceCap }), position);
     }
 
@@ -76,7 +76,7 @@ public class PerfectOnTreesTests
     {
         var perfect = new PerfectPlayer();
         int lost = 0;
-        foreach (var position in RandomSums(seed: 504, count: 600, maxParts: 3, maxDepth: 3))
+        foreach (var position in RandomSums(seed: 504, count: 400, maxParts: 3, maxDepth: 3))
         {
             var brute = new BruteForce();
             foreach (var side in new[] { Side.Left, Side.Right })

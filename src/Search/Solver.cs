@@ -1,0 +1,35 @@
+using Bramble.Rules;
+using Bramble.Values;
+
+namespace Bramble.Search;
+
+/// <summary>Who wins with one side moving first, and a winning first move when that side wins.</summary>
+/// <param name="Winner">The winner, or null when the search ran out of budget.</param>
+/// <param name="Move">A winning first move for <paramref name="First"/> when it wins, else null.</param>
+public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact);
+
+/// <summary>What <c>bramble solve</c> reports (SPEC.md §7).</summary>
+/// <param name="Outcome">The outcome class, when both sides were solved exactly.</param>
+public sealed record SolveReport(Outcome? Outcome, SolveAnswer? LeftFirst, SolveAnswer? RightFirst, long Nodes, long ElapsedMs, string Strategy, bool Exact);
+
+/// <summary>Solves a position for one or both first players with one player instance (so its memo carries over).</summary>
+public static class Solver
+{
+    /// <param name="budget">The budget of each first player's search.</param>
+    public static SolveReport Solve(IPosition position, IReadOnlyCollection<Side> firsts, IPlayer player, TimeSpan budget, CancellationToken halt = default)
+    {
+        SolveAnswer? left = null, right = null;
+        foreach (var first in firsts)
+        {
+            var d = player.Choose(position, first, budget, halt);
+            Side? winner = d.Exact && d.Winning is { } w ? (w ? first : first.Other()) : null;
+            string? move = winner == first && d.Move is { } m ? position.FormatMove(m) : null;
+            var answer = new SolveAnswer(first, winner, move, d.Nodes, d.ElapsedMs, d.Exact && winner is not null);
+            if (first == Side.Left) left = answer; else right = answer;
+        }
+        var answers = new[] { left, right }.Where(a => a is not null).Select(a => a!).ToList();
+        Outcome? outcome = left?.Winner is { } lw && right?.Winner is { } rw ? OutcomeExtensions.FromWinners(lw, rw) : null;
+        return new SolveReport(outcome, left, right, answers.Sum(a => a.Nodes), answers.Sum(a => a.ElapsedMs), player.Name,
+            answers.All(a => a.Exact));
+    }
+}
