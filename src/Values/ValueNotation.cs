@@ -312,7 +312,7 @@ public static class ValueExprWriter
         SwitchExpr s => ascii ? $"{{{s.X}|{-s.X}}}" : "±" + s.X,
         OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
         SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
-        NegateExpr n => n.Inner is NumberExpr or UpStarExpr or OptionsExpr ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
+        NegateExpr n => n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u && (u.X.IsZero || u.Ups == 0)) ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
         _ => throw new ArgumentException($"unknown expression {expr}"),
     };
 

@@ -67,3 +67,19 @@ public class NotationTests
         }
     }
 }
+
+public class ExpressionWriterTests
+{
+    [Theory]
+    [InlineData("-(1/2 + ↑)")]
+    [InlineData("-↑*")]
+    [InlineData("-{2|1}")]
+    [InlineData("{5|2||0} + -3/4")]
+    public void WrittenExpressionsParseBackToTheSameValue(string text)
+    {
+        var store = new GameStore();
+        var expr = ValueNotation.Parse(text);
+        var again = ValueNotation.Parse(ValueExprWriter.Write(expr));
+        Assert.Equal(store.Evaluate(expr), store.Evaluate(again));
+    }
+}

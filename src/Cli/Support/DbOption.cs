@@ -22,7 +22,7 @@ public static class DbOption
         }
         catch (DatabaseFormatException e)
         {
-            throw new InputException($"--db {file.FullName}: {e.Message}");
+            throw new InputException($"--db: {e.Message}");
         }
     }
 
@@ -35,7 +35,7 @@ public static class DbOption
         }
         catch (DatabaseFormatException e)
         {
-            throw new InputException($"--db {file.FullName}: {e.Message}");
+            throw new InputException($"--db: {e.Message}");
         }
     }
 }
