@@ -20,6 +20,7 @@ public sealed class AlphaBetaPlayer(long nodeCap = AlphaBetaPlayer.DefaultNodeCa
     private readonly TranspositionTable _table = new(log2TableSize);
     private SearchBudget _budget = SearchBudget.Unlimited();
     private bool _horizon;
+    private string? _lastRoot;
 
     public string Name => "alphabeta";
     public long NodeCap => nodeCap;
@@ -31,6 +32,11 @@ public sealed class AlphaBetaPlayer(long nodeCap = AlphaBetaPlayer.DefaultNodeCa
     {
         _budget = new SearchBudget(budget, halt, nodeCap);
         LastHitCap = false;
+        // Position hashes are only promised to tell positions of one game apart (a Hackenbush hash
+        // covers edge ids and colours, not where the edges are), so the table is kept only while
+        // the same root is searched again (both first players of one position), never across roots.
+        if (position.Text != _lastRoot) _table.Clear();
+        _lastRoot = position.Text;
         var moves = position.Moves(side);
         if (moves.Count == 0) return new Decision(null, 0, _budget.ElapsedMs, Exact: true, Winning: false);
         Move best = moves[0];

@@ -11,7 +11,7 @@ namespace Bramble.Search;
 public sealed class TemperaturePlayer : IPlayer
 {
     private readonly TemperatureStrategy _strategy;
-    private (HashSet<string> Texts, Dyadic Ambient, Side Side)? _left;
+    private (List<string> Texts, Dyadic Ambient, Side Side)? _left;
 
     /// <param name="exactCap">Node cap for a component's exact value; larger components get an estimated thermograph.</param>
     public TemperaturePlayer(TemperatureRule rule, ValueContext? context = null, long exactCap = 20_000)
@@ -35,10 +35,13 @@ public sealed class TemperaturePlayer : IPlayer
         (IReadOnlySet<string>, Dyadic)? threat = null;
         if (Rule == TemperatureRule.Sentestrat && _left is { } before && before.Side == side)
         {
-            // Components present now but not in the position this player left were made by the opponent's move.
-            var created = new HashSet<string>(position.Components().Select(c => c.Text), StringComparer.Ordinal);
-            created.ExceptWith(before.Texts);
-            threat = (created, before.Ambient);
+            // Components present now but not in the position this player left were made by the
+            // opponent's move; one move replaces exactly one component, otherwise this is another game.
+            var now = position.Components().Select(c => c.Text).ToList();
+            var remaining = new List<string>(before.Texts);
+            var created = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var t in now) if (!remaining.Remove(t)) created.Add(t);
+            if (remaining.Count == 1) threat = (created, before.Ambient);
         }
         TemperatureStrategy.Choice choice;
         try
@@ -63,7 +66,7 @@ public sealed class TemperaturePlayer : IPlayer
         {
             var readings = _strategy.ReadAll(after, budget);
             var ambient = new Compound(readings.Select(r => r.Thermograph).ToList()).Ambient;
-            _left = (new HashSet<string>(readings.Select(r => r.Position.Text), StringComparer.Ordinal), ambient, side);
+            _left = (readings.Select(r => r.Position.Text).ToList(), ambient, side);
         }
         catch (BudgetExceededException)
         {
