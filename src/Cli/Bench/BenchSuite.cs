@@ -34,10 +34,14 @@ public static class BenchSuite
             Rulesets.Get(ruleset).Generate(generator, 1, size, seed, colours)[0];
         int[] ks = quick ? [4, 6, 8, 10] : [4, 6, 8, 10, 12, 16];
         foreach (int k in ks) list.Add(new($"forms hot k={k}", "forms", One("forms", "hot", k, 1000 + k)));
-        list.Add(new("hackenbush green trees", "hackenbush", One("hackenbush", "trees", quick ? 14 : 20, 11, "G")));
-        list.Add(new("hackenbush blue-red trees", "hackenbush", One("hackenbush", "trees", quick ? 14 : 20, 12, "BR")));
-        list.Add(new("hackenbush mixed sum", "hackenbush", One("hackenbush", "mixed", quick ? 14 : 20, 13)));
-        list.Add(new("hackenbush circuits", "hackenbush", One("hackenbush", "graphs", quick ? 10 : 14, 14)));
+        // Sums of several pieces: a single green tree is always won by cutting its trunk, which would flatter alphabeta.
+        string Sum(string generator, int pieces, int size, int seed, string? colours = null) =>
+            string.Join(" + ", Enumerable.Range(0, pieces).Select(i => One("hackenbush", generator, size, seed + 97 * i, colours)));
+        int n = quick ? 8 : 10;
+        list.Add(new("hackenbush green trees", "hackenbush", Sum("trees", 3, n, 11, "G")));
+        list.Add(new("hackenbush blue-red trees", "hackenbush", Sum("trees", 3, n, 12, "BR")));
+        list.Add(new("hackenbush mixed sum", "hackenbush", Sum("mixed", 2, n + 4, 13)));
+        list.Add(new("hackenbush circuits", "hackenbush", Sum("graphs", 3, quick ? 7 : 9, 14)));
         list.Add(new("domineering 4 regions", "domineering", One("domineering", "sums", 4, 15)));
         list.Add(new("domineering 6 regions", "domineering", One("domineering", "sums", 6, 16)));
         list.Add(new("domineering 4x4", "domineering", "4x4"));

@@ -38,6 +38,9 @@ public static class BenchVerb
             {
                 Console.Out.WriteLine();
                 Console.Out.WriteLine($"alphabeta node cap {cap:N0}; '~' marks a perfect answer that was not exact; ratio = alphabeta nodes / perfect nodes (a lower bound when capped).");
+                Console.Out.WriteLine("positions:");
+                foreach (var r in results)
+                    Console.Out.WriteLine($"  {r.Case.Name,-28} {(r.Case.Position.Length > 90 ? r.Case.Position[..87] + "..." : r.Case.Position)}");
             }
             else
             {
