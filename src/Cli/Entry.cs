@@ -24,6 +24,7 @@ public static class Entry
         root.Subcommands.Add(DrawVerb.Build());
         root.Subcommands.Add(PlayVerb.Build());
         root.Subcommands.Add(BenchVerb.Build());
+        root.Subcommands.Add(GenerateVerb.Build());
         root.Subcommands.Add(DbVerb.Build());
         root.Subcommands.Add(SolveVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
