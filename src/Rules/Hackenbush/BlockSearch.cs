@@ -12,6 +12,7 @@ namespace Bramble.Rules.Hackenbush;
 /// circuit the rest is valued as a tree, and only what is still biconnected is searched. Every
 /// searched state counts one node in the <see cref="ValueContext"/>, so budgets apply.
 /// </summary>
+public static class Prof { public static long Make, MakeN, Opts, Num, Ord, Add; }
 internal sealed class BlockSearch
 {
     public const int MaxEdges = 128;
@@ -146,7 +147,7 @@ internal sealed class BlockSearch
                 }
             }
         }
-        return _store.Make(left, right);
+        var sw = System.Diagnostics.Stopwatch.StartNew(); var r = _store.Make(left, right); Prof.Make += sw.ElapsedTicks; Prof.MakeN++; Prof.Opts += left.Count + right.Count; if (_store.IsNumber(r)) Prof.Num++; return r;
     }
 
     /// <summary>The edges of <paramref name="set"/> still connected to <paramref name="root"/>.</summary>

@@ -14,7 +14,7 @@ public static class Fusion
     public static int NimValue(HackenbushPosition position)
     {
         if (!position.IsGreen) throw new ArgumentException("the fusion principle applies to green edges only");
-        return NimValue(position.NodeCount, position.From, position.To, position.Adjacency);
+        return position.NimValue;
     }
 
     internal static int NimValue(int nodeCount, int[] from, int[] to, Adjacency adj)

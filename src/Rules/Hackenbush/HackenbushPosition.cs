@@ -23,6 +23,7 @@ public sealed class HackenbushPosition : IPosition
     private string? _text;
     private string? _key;
     private IReadOnlyList<IPosition>? _components;
+    private int _nimValue = -1;
 
     internal HackenbushPosition(HackenbushRuleset ruleset, int[] ids, EdgeColour[] colours, int[] from, int[] to, int nodeCount, ulong? hash = null)
     {
@@ -61,10 +62,20 @@ public sealed class HackenbushPosition : IPosition
     public bool IsEmpty => _ids.Length == 0;
 
     /// <summary>True when no edge is green, so every component is a number.</summary>
-    public bool IsBlueRed => Array.IndexOf(_colours, EdgeColour.Green) < 0;
+    public bool IsBlueRed => _colours.AsSpan().IndexOf(EdgeColour.Green) < 0;
 
     /// <summary>True when every edge is green, so the value is a nimber.</summary>
-    public bool IsGreen => !_colours.Any(c => c != EdgeColour.Green);
+    public bool IsGreen => _colours.AsSpan().IndexOfAnyExcept(EdgeColour.Green) < 0;
+
+    /// <summary>The nim-value of an all-green position (fusion and colon principles), computed once.</summary>
+    internal int NimValue
+    {
+        get
+        {
+            if (_nimValue < 0) _nimValue = Fusion.NimValue(_nodeCount, _from, _to, Adjacency);
+            return _nimValue;
+        }
+    }
 
     // ------------------------------------------------------------------ IPosition
 

@@ -15,10 +15,11 @@ namespace Bramble.Rules.Hackenbush;
 /// </code>
 /// Trees therefore get their canonical encoding. A green block carrying only green parts is
 /// written fused (fusion principle): its vertices merge into its root and its edges become
-/// loops, that is green twigs, of which only the parity is kept — for all-green pieces the key
-/// is the normal form of the fused tree, which linear time allows even for 10^6 edges, and it
-/// still determines the value. Every other block gets a canonical labelling
-/// (<see cref="BlockCertificate"/>). See docs/hackenbush.md.
+/// loops, that is green twigs, of which only the parity is kept. Every other block gets a
+/// canonical labelling (<see cref="BlockCertificate"/>). An all-green piece, finally, is
+/// written as the stalk that fusion and the colon principle reduce it to, <c>*n</c>: that is its
+/// normal form under those principles, found in linear time even for 10^6 edges, where
+/// writing out the fused tree would cost more than the value itself. See docs/hackenbush.md.
 /// </summary>
 internal static class NormalForm
 {
@@ -29,6 +30,7 @@ internal static class NormalForm
     public static string Key(HackenbushPosition piece)
     {
         if (piece.IsEmpty) return "0";
+        if (piece.IsGreen) return "*" + piece.NimValue;
         int n = piece.NodeCount;
         var colours = piece.Colours;
         var from = piece.From;

@@ -57,6 +57,7 @@ internal sealed class NotationReader
             if (!AtEnd) throw Error(_pos, "the end of the text (0 stands alone for the empty position)");
             return;
         }
+        if (Current != '[' && !EdgeColourExtensions.TryParse(Current, out _)) throw Error(_pos, PartStart);
         while (true)
         {
             ReadPart();

@@ -40,7 +40,7 @@ internal sealed class PieceEvaluator
     public Game Evaluate(HackenbushPosition piece)
     {
         if (piece.IsEmpty) return _store.Zero;
-        if (piece.IsGreen) return _store.Nimber(Fusion.NimValue(piece));
+        if (piece.IsGreen) return _store.Nimber(piece.NimValue);
         int n = piece.NodeCount;
         var blocks = BlockDecomposition.Build(n, piece.From, piece.To, piece.Adjacency, 0);
         var hang = new LocalValue[n];
@@ -86,7 +86,7 @@ internal sealed class PieceEvaluator
                 }
                 value = fusible ? LocalValue.OfNimber(nim) : hard(b);
             }
-            hang[root] = LocalValue.Add(_store, hang[root], value);
+            {var sw = System.Diagnostics.Stopwatch.StartNew(); hang[root] = LocalValue.Add(_store, hang[root], value); Prof.Add += sw.ElapsedTicks;}
         }
     }
 
@@ -96,7 +96,7 @@ internal sealed class PieceEvaluator
         if (colour == EdgeColour.Green)
         {
             if (carried.IsNimber) return LocalValue.OfNimber(carried.Nim + 1);
-            return LocalValue.OfGame(_store, _store.OrdinalSum(_store.Star, carried.ToGame(_store)));
+            {var sw = System.Diagnostics.Stopwatch.StartNew(); var r = LocalValue.OfGame(_store, _store.OrdinalSum(_store.Star, carried.ToGame(_store))); Prof.Ord += sw.ElapsedTicks; return r;}
         }
         if (carried.Kind == LocalValue.Form.Chain)
         {
@@ -109,7 +109,7 @@ internal sealed class PieceEvaluator
             chain.Extend(colour);
             return LocalValue.OfChain(chain);
         }
-        return LocalValue.OfGame(_store, _store.OrdinalSum(colour == EdgeColour.Blue ? _one : _minusOne, carried.ToGame(_store)));
+        {var sw = System.Diagnostics.Stopwatch.StartNew(); var r = LocalValue.OfGame(_store, _store.OrdinalSum(colour == EdgeColour.Blue ? _one : _minusOne, carried.ToGame(_store))); Prof.Ord += sw.ElapsedTicks; return r;}
     }
 
     private LocalValue SearchBlock(BlockDecomposition blocks, int b, EdgeColour[] colours, int[] from, int[] to, LocalValue[] hang)

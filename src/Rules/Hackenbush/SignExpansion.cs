@@ -7,8 +7,8 @@ namespace Bramble.Rules.Hackenbush;
 /// The sign-expansion rule for blue-red stalks: read from the ground up, each edge before the
 /// first change of colour counts ±1, and from the change on the k-th edge counts ±2^-k (blue +,
 /// red −). Putting a stalk under a number x is the ordinal sum stalk:x, whose sign expansion is
-/// the stalk's followed by x's; so one pass evaluates a whole chain of edges carrying x, in time
-/// linear in the chain plus the length of x's expansion, however big the dyadic gets.
+/// the stalk's followed by x's; so one pass over a chain of edges and a few operations on x
+/// value the whole chain, however big the dyadic gets (see <see cref="Under"/>).
 /// </summary>
 public static class SignExpansion
 {
@@ -20,14 +20,44 @@ public static class SignExpansion
 
     /// <summary>
     /// The number a chain of edges (signs +1 blue, −1 red, from the bottom up) is worth when it
-    /// carries a blue-red part of value <paramref name="carried"/>: the ordinal sum chain:carried.
+    /// carries a blue-red part of value <paramref name="carried"/>: the ordinal sum chain:carried,
+    /// whose sign expansion is the chain's followed by x's. When the chain changes colour, its
+    /// last L signs sit in the halving part, so x's expansion lands at positions L+1, L+2, … and
+    /// adds 2^-L·φ(x), where φ(x) = Σ e_i 2^-i over x's own expansion. A chain of one colour σ
+    /// either runs on into x (x of sign σ: the chain adds σ·k) or changes colour where x begins
+    /// (σ·k + φ(x)). So x is never written out sign by sign: a few word operations per chain.
     /// </summary>
     public static Dyadic Under(ReadOnlySpan<sbyte> bottomUp, Dyadic carried)
     {
+        if (bottomUp.Length == 0) return carried;
+        int sigma = bottomUp[0];
+        int first = 1;
+        while (first < bottomUp.Length && bottomUp[first] == sigma) first++;
+        int after = bottomUp.Length - first;
+        if (after == 0)
+        {
+            var run = Dyadic.FromInteger((long)sigma * bottomUp.Length);
+            return carried.Sign == sigma ? run + carried : run + Phi(carried);
+        }
         var runs = new List<(int Sign, long Length)>();
         foreach (sbyte s in bottomUp) Append(runs, s, 1);
-        AppendExpansion(runs, carried);
-        return Evaluate(runs);
+        return Evaluate(runs) + Phi(carried).Shift(after);
+    }
+
+    /// <summary>
+    /// φ(x) = Σ e_i 2^-i over the sign expansion e of x, every sign counting a half of the one
+    /// before: for x = n + f ≥ 0 (n = ⌊x⌋) that is 1 − 2^-n·(1 − f/2), and φ(−x) = −φ(x). (n plus
+    /// signs give 1 − 2^-n; a fraction f adds one more plus, a minus, then its bits: f/2 − 1 at
+    /// scale 2^-(n+1).)
+    /// </summary>
+    public static Dyadic Phi(Dyadic x)
+    {
+        if (x.IsZero) return Dyadic.Zero;
+        var a = x.Abs();
+        var n = a.Numerator >> a.Exponent;
+        var f = a - Dyadic.FromInteger(n);
+        var value = Dyadic.One - (Dyadic.One - f.Shift(1)).Shift(checked((int)n));
+        return x.Sign > 0 ? value : -value;
     }
 
     /// <summary>The sign expansion of x as runs of equal signs, from the ground up.</summary>
@@ -63,13 +93,29 @@ public static class SignExpansion
         Append(runs, sigma, n + 1);
         Append(runs, -sigma, 1);
         int t = fraction.Exponent;
-        var numerator = fraction.Numerator;
+        var bits = fraction.Numerator.ToByteArray(isUnsigned: true, isBigEndian: false);
         for (int i = 1; i <= t - 1; i++)
         {
-            bool bit = !(numerator >> (t - i)).IsEven;
+            int position = t - i;
+            bool bit = (bits[position >> 3] >> (position & 7) & 1) == 1;
             Append(runs, bit ? sigma : -sigma, 1);
         }
     }
+
+    /// <summary>
+    /// 1:x, a blue edge carrying x, by arithmetic: x + 1 when x ≥ 0, else (x + j)/2^(j−1) with j
+    /// the least positive integer such that x + j &gt; 1 — the rule for trees in CHECKS.md §2, kept
+    /// as an independent second route to the same numbers.
+    /// </summary>
+    public static Dyadic BlueUnder(Dyadic x)
+    {
+        if (x.Sign >= 0) return x + Dyadic.One;
+        var j = (-x).Floor() + 2;
+        return (x + Dyadic.FromInteger(j)).Shift(checked((int)(j - 1)));
+    }
+
+    /// <summary>−1:x, a red edge carrying x: the mirror image of <see cref="BlueUnder"/>.</summary>
+    public static Dyadic RedUnder(Dyadic x) => -BlueUnder(-x);
 
     private static Dyadic Evaluate(List<(int Sign, long Length)> runs)
     {
