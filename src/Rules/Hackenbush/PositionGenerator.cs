@@ -24,7 +24,7 @@ internal static class PositionGenerator
         var palette = Palette(colours);
         var name = generator.ToLowerInvariant();
         if (!Names.Contains(name)) throw new ArgumentException($"unknown Hackenbush generator '{generator}'; known: {string.Join(", ", Names)}");
-        var random = new SeededRandom(seed);
+        var random = new RepeatableRandom(seed);
         var result = new List<string>(count);
         var ruleset = new HackenbushRuleset();
         for (int i = 0; i < count; i++)
@@ -56,7 +56,7 @@ internal static class PositionGenerator
     }
 
     /// <summary>Splits <paramref name="total"/> into parts of 1..<paramref name="most"/>.</summary>
-    private static List<int> Split(SeededRandom random, int total, int most)
+    private static List<int> Split(RepeatableRandom random, int total, int most)
     {
         var parts = new List<int>();
         while (total > 0)
@@ -70,12 +70,12 @@ internal static class PositionGenerator
 
     private static int Typical(int size) => Math.Max(2, (int)Math.Ceiling(2 * Math.Sqrt(size)));
 
-    private static void Stalks(Sketch s, SeededRandom random, int size, EdgeColour[] palette)
+    private static void Stalks(Sketch s, RepeatableRandom random, int size, EdgeColour[] palette)
     {
         foreach (int part in Split(random, size, Typical(size))) s.AddTree(Chain(part), random, palette);
     }
 
-    private static void Trees(Sketch s, SeededRandom random, int size, EdgeColour[] palette)
+    private static void Trees(Sketch s, RepeatableRandom random, int size, EdgeColour[] palette)
     {
         int trees = 1 + random.Next(Math.Min(3, size));
         var cuts = Enumerable.Range(0, trees - 1).Select(_ => 1 + random.Next(size - 1)).Distinct().OrderBy(x => x).ToList();
@@ -87,7 +87,7 @@ internal static class PositionGenerator
         }
     }
 
-    private static void Graph(Sketch s, SeededRandom random, int size, EdgeColour[] palette)
+    private static void Graph(Sketch s, RepeatableRandom random, int size, EdgeColour[] palette)
     {
         if (size == 1)
         {
@@ -99,7 +99,7 @@ internal static class PositionGenerator
         s.AddGraph(parent, chords, random, palette);
     }
 
-    private static void Mixed(Sketch s, SeededRandom random, int size, EdgeColour[] palette)
+    private static void Mixed(Sketch s, RepeatableRandom random, int size, EdgeColour[] palette)
     {
         foreach (int part in Split(random, size, Typical(size)))
         {
@@ -121,7 +121,7 @@ internal static class PositionGenerator
     }
 
     /// <summary>Parent of each vertex 1..n of a random tree standing on the ground with one edge.</summary>
-    private static int[] RandomTree(SeededRandom random, int n)
+    private static int[] RandomTree(RepeatableRandom random, int n)
     {
         var parent = new int[n + 1];
         for (int v = 2; v <= n; v++) parent[v] = random.Chance(1, 2) ? v - 1 : 1 + random.Next(v - 1);
@@ -139,10 +139,10 @@ internal static class PositionGenerator
         public void AddLoopAtGround(EdgeColour colour) => Add(colour, 0, 0);
 
         /// <summary>A tree given by parents, written in pre-order (the order the notation lists edges).</summary>
-        public void AddTree(int[] parent, SeededRandom random, EdgeColour[] palette) => AddTreeEdges(parent, random, palette);
+        public void AddTree(int[] parent, RepeatableRandom random, EdgeColour[] palette) => AddTreeEdges(parent, random, palette);
 
         /// <summary>A tree plus chords from random vertices to ancestors 1-4 steps down (parallel edges when 1), some loops.</summary>
-        public void AddGraph(int[] parent, int chords, SeededRandom random, EdgeColour[] palette)
+        public void AddGraph(int[] parent, int chords, RepeatableRandom random, EdgeColour[] palette)
         {
             var node = AddTreeEdges(parent, random, palette);
             int n = parent.Length - 1;
@@ -160,7 +160,7 @@ internal static class PositionGenerator
             }
         }
 
-        private int[] AddTreeEdges(int[] parent, SeededRandom random, EdgeColour[] palette)
+        private int[] AddTreeEdges(int[] parent, RepeatableRandom random, EdgeColour[] palette)
         {
             int n = parent.Length - 1;
             var node = new int[n + 1];

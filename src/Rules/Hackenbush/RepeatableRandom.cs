@@ -4,7 +4,7 @@ namespace Bramble.Rules.Hackenbush;
 /// SplitMix64: a tiny generator whose output for a seed is fixed forever, so that a generated
 /// suite (`bramble generate … --seed X`) reads the same on every machine and every .NET version.
 /// </summary>
-internal sealed class SeededRandom(long seed)
+internal sealed class RepeatableRandom(long seed)
 {
     private ulong _state = (ulong)seed;
 
