@@ -19,14 +19,19 @@ public sealed partial class GameStore
     private readonly List<int[]?> _right = new();
     private readonly List<Dyadic?> _number = new();
     private readonly List<UpStarTag?> _tag = new();
+    // What kind of record an id is, read on the hot paths instead of the nullable structs above.
+    private readonly List<byte> _kind = new();
+    private const byte General = 0, NumberKind = 1, TaggedKind = 2;
 
     private readonly Dictionary<OptionKey, int> _byOptions = new();
     private readonly Dictionary<Dyadic, int> _numbers = new();
     private readonly Dictionary<UpStarTag, int> _upStars = new();
 
     // Operation caches keyed by id pairs packed into a long (first id in the high half).
-    private readonly Dictionary<long, bool> _leq = new();
-    private readonly Dictionary<long, int> _sum = new();
+    // long's own hash is the XOR of its halves, so every pair (a, b) with the same a ^ b would
+    // share a bucket: the packed keys get a multiplicative hash instead.
+    private readonly Dictionary<long, bool> _leq = new(PairHash.Instance);
+    private readonly Dictionary<long, int> _sum = new(PairHash.Instance);
     private readonly List<int> _negative = new();
     private readonly List<int> _birthday = new();
 
@@ -55,7 +60,7 @@ public sealed partial class GameStore
         if (_numbers.TryGetValue(value, out int id)) return new Game(id);
         id = NewRecord(null, null, value);
         _numbers.Add(value, id);
-        _tag[id] = new UpStarTag(value, 0, 0);
+        SetTag(id, new UpStarTag(value, 0, 0));
         _upStars[new UpStarTag(value, 0, 0)] = id;
         return new Game(id);
     }
@@ -81,8 +86,18 @@ public sealed partial class GameStore
         }
         else if (n == 0)
         {
-            var lower = Enumerable.Range(0, m).Select(Nimber).ToArray();
-            g = Make(lower, lower);
+            // *m = {0, *, ..., *(m-1) | 0, *, ..., *(m-1)}: the options are canonical and none
+            // dominates or reverses, so the record is written directly rather than simplified.
+            var lower = new int[m];
+            for (int i = 0; i < m; i++) lower[i] = Nimber(i).Id;
+            Array.Sort(lower);
+            var key = new OptionKey(lower, (int[])lower.Clone());
+            if (!_byOptions.TryGetValue(key, out int nid))
+            {
+                nid = NewRecord(key.Left, key.Right, null);
+                _byOptions.Add(key, nid);
+            }
+            g = new Game(nid);
         }
         else if (n < 0)
         {
@@ -98,7 +113,7 @@ public sealed partial class GameStore
             g = AddByOptions(Up, UpStar(Dyadic.Zero, n - 1, m));
         }
         _upStars[tag] = g.Id;
-        _tag[g.Id] = tag;
+        SetTag(g.Id, tag);
         return g;
     }
 
@@ -143,6 +158,9 @@ public sealed partial class GameStore
         SortUnique(l);
         SortUnique(r);
         if (TryNumberRule(l, r, out var quick)) return quick;
+        // Removing dominated options and bypassing reversible ones keep the value of {L | R}, so
+        // the comparisons with it stay valid for the whole simplification.
+        ForgetVirtual();
         bool changed = true;
         while (changed)
         {
@@ -156,12 +174,10 @@ public sealed partial class GameStore
                 {
                     if (LeqVirtualRight(ar, l, r))
                     {
-                        int a = l[i];
                         l.RemoveAt(i);
                         l.AddRange(LeftIds(ar));
                         SortUnique(l);
                         changed = true;
-                        _ = a;
                         break;
                     }
                 }
@@ -225,20 +241,39 @@ public sealed partial class GameStore
         }
     }
 
+    // Memos of the comparisons with the game {L | R} under construction, valid while L and R
+    // stay as they are. Without them the comparison walks the option tree of the option being
+    // tested, which is exponential in its depth. Make never re-enters itself while comparing, so
+    // one pair of tables serves the store.
+    private readonly Dictionary<int, bool> _belowVirtual = new();
+    private readonly Dictionary<int, bool> _aboveVirtual = new();
+
+    private void ForgetVirtual()
+    {
+        _belowVirtual.Clear();
+        _aboveVirtual.Clear();
+    }
+
     /// <summary>x ≤ {L | R}: no (R option) ≤ x and no x^L ≥ {L | R}.</summary>
     private bool LeqVirtualRight(int x, List<int> l, List<int> r)
     {
-        foreach (int b in r) if (Leq(b, x)) return false;
-        foreach (int xl in LeftIds(x)) if (LeqVirtualLeft(l, r, xl)) return false;
-        return true;
+        if (_belowVirtual.TryGetValue(x, out bool known)) return known;
+        bool result = true;
+        foreach (int b in r) if (Leq(b, x)) { result = false; break; }
+        if (result) foreach (int xl in LeftIds(x)) if (LeqVirtualLeft(l, r, xl)) { result = false; break; }
+        _belowVirtual[x] = result;
+        return result;
     }
 
     /// <summary>{L | R} ≤ y: no (L option) ≥ y and no y^R ≤ {L | R}.</summary>
     private bool LeqVirtualLeft(List<int> l, List<int> r, int y)
     {
-        foreach (int a in l) if (Leq(y, a)) return false;
-        foreach (int yr in RightIds(y)) if (LeqVirtualRight(yr, l, r)) return false;
-        return true;
+        if (_aboveVirtual.TryGetValue(y, out bool known)) return known;
+        bool result = true;
+        foreach (int a in l) if (Leq(y, a)) { result = false; break; }
+        if (result) foreach (int yr in RightIds(y)) if (LeqVirtualRight(yr, l, r)) { result = false; break; }
+        _aboveVirtual[y] = result;
+        return result;
     }
 
     private void InferNimber(int id, int[] l, int[] r)
@@ -252,7 +287,7 @@ public sealed partial class GameStore
         var ms = l.Select(i => _tag[i]!.Value.M).OrderBy(m => m).ToArray();
         for (int i = 0; i < ms.Length; i++) if (ms[i] != i) return;
         var tag = new UpStarTag(Dyadic.Zero, 0, ms.Length);
-        _tag[id] = tag;
+        SetTag(id, tag);
         _upStars.TryAdd(tag, id);
     }
 
@@ -263,9 +298,19 @@ public sealed partial class GameStore
         _right.Add(right);
         _number.Add(number);
         _tag.Add(null);
+        _kind.Add(number is null ? General : NumberKind);
+        _ls.Add(number ?? default);
+        _rs.Add(number ?? default);
+        _stopsKnown.Add(number is not null);
         _negative.Add(-1);
         _birthday.Add(-1);
         return id;
+    }
+
+    private void SetTag(int id, UpStarTag tag)
+    {
+        _tag[id] = tag;
+        if (_kind[id] == General) _kind[id] = TaggedKind;
     }
 
     private static void SortUnique(List<int> list)
@@ -335,7 +380,7 @@ public sealed partial class GameStore
             if (_tag[g.Id] is { } t && _tag[id] is null)
             {
                 var negated = new UpStarTag(-t.X, -t.N, t.M);
-                _tag[id] = negated;
+                SetTag(id, negated);
                 _upStars.TryAdd(negated, id);
             }
         }
@@ -395,27 +440,31 @@ public sealed partial class GameStore
     private bool Leq(int a, int b)
     {
         if (a == b) return true;
+        byte ka = _kind[a], kb = _kind[b];
+        if (ka == NumberKind && kb == NumberKind) return _number[a]!.Value <= _number[b]!.Value;
+        if (ka != General && kb != General)
+        {
+            var s = _tag[a]!.Value;
+            var t = _tag[b]!.Value;
+            return new UpStarTag(t.X - s.X, t.N - s.N, t.M ^ s.M).IsNonNegative;
+        }
+        // Stops settle most comparisons without search: a ≤ b forces L(a) ≤ L(b) and
+        // R(a) ≤ R(b), and L(a) < R(b) forces a < b (L(a - b) ≤ L(a) - R(b) < 0).
+        EnsureStops(a);
+        EnsureStops(b);
+        if (_ls[a] > _ls[b] || _rs[a] > _rs[b]) return false;
+        if (_ls[a] < _rs[b]) return true;
         long key = Pack(a, b);
         if (_leq.TryGetValue(key, out bool known)) return known;
-        bool result;
-        if (_number[a] is { } x && _number[b] is { } y) result = x <= y;
-        else if (_tag[a] is { } s && _tag[b] is { } t) result = new UpStarTag(t.X - s.X, t.N - s.N, t.M ^ s.M).IsNonNegative;
-        else if (_number[a] is not null)
+        bool result = true;
+        if (ka != NumberKind)
         {
-            // x ≤ G for a non-number G exactly when no G^R ≤ x (compare G - x with 0 by translation).
-            result = true;
+            // No a^L ≥ b (a number a has no left option that matters: x ≤ G iff no G^R ≤ x).
+            foreach (int al in LeftIds(a)) if (Leq(b, al)) { result = false; break; }
+        }
+        if (result && kb != NumberKind)
+        {
             foreach (int br in RightIds(b)) if (Leq(br, a)) { result = false; break; }
-        }
-        else if (_number[b] is not null)
-        {
-            result = true;
-            foreach (int al in LeftIds(a)) if (Leq(b, al)) { result = false; break; }
-        }
-        else
-        {
-            result = true;
-            foreach (int al in LeftIds(a)) if (Leq(b, al)) { result = false; break; }
-            if (result) foreach (int br in RightIds(b)) if (Leq(br, a)) { result = false; break; }
         }
         _leq[key] = result;
         return result;
@@ -543,6 +592,13 @@ public sealed partial class GameStore
         }
         _notUpStar.Add(id);
         return null;
+    }
+
+    internal sealed class PairHash : IEqualityComparer<long>
+    {
+        public static readonly PairHash Instance = new();
+        public bool Equals(long x, long y) => x == y;
+        public int GetHashCode(long key) => (int)(((ulong)key * 0x9E3779B97F4A7C15UL) >> 32);
     }
 
     private sealed class ListPolicy : PooledObjectPolicy<List<int>>

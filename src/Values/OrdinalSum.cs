@@ -2,7 +2,7 @@ namespace Bramble.Values;
 
 public sealed partial class GameStore
 {
-    private readonly Dictionary<long, int> _ordinal = new();
+    private readonly Dictionary<long, int> _ordinal = new(PairHash.Instance);
 
     /// <summary>
     /// The ordinal sum G:H = {G^L, G:H^L | G^R, G:H^R}, with G taken in canonical form (the ordinal
