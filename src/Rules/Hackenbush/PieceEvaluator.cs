@@ -86,7 +86,7 @@ internal sealed class PieceEvaluator
                 }
                 value = fusible ? LocalValue.OfNimber(nim) : hard(b);
             }
-            {var sw = System.Diagnostics.Stopwatch.StartNew(); hang[root] = LocalValue.Add(_store, hang[root], value); Prof.Add += sw.ElapsedTicks;}
+            hang[root] = LocalValue.Add(_store, hang[root], value);
         }
     }
 
@@ -96,7 +96,7 @@ internal sealed class PieceEvaluator
         if (colour == EdgeColour.Green)
         {
             if (carried.IsNimber) return LocalValue.OfNimber(carried.Nim + 1);
-            {var sw = System.Diagnostics.Stopwatch.StartNew(); var r = LocalValue.OfGame(_store, _store.OrdinalSum(_store.Star, carried.ToGame(_store))); Prof.Ord += sw.ElapsedTicks; return r;}
+            return LocalValue.OfGame(_store, _store.OrdinalSum(_store.Star, carried.ToGame(_store)));
         }
         if (carried.Kind == LocalValue.Form.Chain)
         {
@@ -109,7 +109,7 @@ internal sealed class PieceEvaluator
             chain.Extend(colour);
             return LocalValue.OfChain(chain);
         }
-        {var sw = System.Diagnostics.Stopwatch.StartNew(); var r = LocalValue.OfGame(_store, _store.OrdinalSum(colour == EdgeColour.Blue ? _one : _minusOne, carried.ToGame(_store))); Prof.Ord += sw.ElapsedTicks; return r;}
+        return LocalValue.OfGame(_store, _store.OrdinalSum(colour == EdgeColour.Blue ? _one : _minusOne, carried.ToGame(_store)));
     }
 
     private LocalValue SearchBlock(BlockDecomposition blocks, int b, EdgeColour[] colours, int[] from, int[] to, LocalValue[] hang)
