@@ -84,16 +84,16 @@ public class HackenbushLargeBenchmarks
 
 /// <summary>
 /// Exact values the store has to work for: mixed trees (the <c>trees</c> generator with all
-/// three colours: one to three trees of <see cref="Edges"/> edges in all). The 2,000-edge case
-/// of the issue is left out: it runs for minutes (bench/README.md gives the one-off timing);
-/// the three sizes here show how the time grows.
+/// three colours: one to three trees of <see cref="Edges"/> edges in all). Larger sizes are left
+/// out: at 1,000 edges one call takes minutes, longer than BenchmarkDotNet lets an in-process
+/// benchmark run (bench/README.md gives that one measured call).
 /// </summary>
 [Config(typeof(OneRunConfig))]
 public class HackenbushMixedTreeBenchmarks
 {
     private string _text = "";
 
-    [Params(250, 500, 1000)]
+    [Params(250, 500)]
     public int Edges { get; set; } = 250;
 
     [GlobalSetup]
