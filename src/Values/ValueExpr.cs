@@ -24,3 +24,12 @@ public sealed record SumExpr(IReadOnlyList<ValueExpr> Terms) : ValueExpr;
 
 /// <summary>-G.</summary>
 public sealed record NegateExpr(ValueExpr Inner) : ValueExpr;
+
+/// <summary>A named part of a shared form, <c>#k</c>, at a 0-based column of the text.</summary>
+public sealed record PartExpr(int Name, int Column) : ValueExpr;
+
+/// <summary>
+/// A value written with shared parts: <c>body where #1 = …; #2 = …</c>. Large canonical forms
+/// are written this way so that each distinct subgame appears once (docs/values.md).
+/// </summary>
+public sealed record SharedExpr(ValueExpr Body, IReadOnlyDictionary<int, ValueExpr> Parts) : ValueExpr;

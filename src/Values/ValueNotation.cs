@@ -19,10 +19,19 @@ public static class ValueNotation
     public static IReadOnlyList<(ValueExpr Term, int Column)> ParseTerms(string text)
     {
         var p = new Parser(text);
-        var terms = p.ParseSum(text.Length);
-        p.SkipSpace(text.Length);
-        if (p.Pos < text.Length) throw p.Fail("'+', '-' or the end of the value");
-        return terms;
+        int where = p.FindWhere();
+        int end = where < 0 ? text.Length : where;
+        var terms = p.ParseSum(end);
+        p.SkipSpace(end);
+        if (p.Pos < end) throw p.Fail(where < 0 ? "'+', '-', 'where' or the end of the value" : "'+', '-' or 'where'");
+        if (where < 0)
+        {
+            if (p.FirstPart is { } stray) { p.Pos = stray.Column; throw p.Fail($"a value (#{stray.Name} is a named part, and there is no 'where' to define it)"); }
+            return terms;
+        }
+        var parts = p.ParseParts(where + Parser.WhereWord.Length);
+        p.CheckParts(parts);
+        return terms.Select(t => ((ValueExpr)new SharedExpr(t.Item1, parts), t.Item2)).ToList();
     }
 
     private sealed class Parser(string text)
@@ -34,6 +43,118 @@ public static class ValueNotation
         public void SkipSpace(int end)
         {
             while (Pos < end && char.IsWhiteSpace(text[Pos])) Pos++;
+        }
+
+        public const string WhereWord = "where";
+
+        /// <summary>The first named part met while parsing, so a stray reference is caught.</summary>
+        public PartExpr? FirstPart;
+
+        private readonly List<PartExpr> _references = new();
+
+        /// <summary>Start of the top-level word 'where' (outside all brackets), or -1.</summary>
+        public int FindWhere()
+        {
+            int depth = 0;
+            for (int i = 0; i + WhereWord.Length <= text.Length; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (depth == 0 && string.CompareOrdinal(text, i, WhereWord, 0, WhereWord.Length) == 0
+                    && (i == 0 || !char.IsLetter(text[i - 1]))
+                    && (i + WhereWord.Length == text.Length || !char.IsLetter(text[i + WhereWord.Length])))
+                    return i;
+            }
+            return -1;
+        }
+
+        /// <summary>The definitions after 'where': <c>#k = value</c>, separated by ';'.</summary>
+        public Dictionary<int, ValueExpr> ParseParts(int start)
+        {
+            var parts = new Dictionary<int, ValueExpr>();
+            Pos = start;
+            while (true)
+            {
+                SkipSpace(text.Length);
+                int at = Pos;
+                if (Pos >= text.Length || text[Pos] != '#') throw Fail("a named part such as '#1 = {1|0}'");
+                int name = ParsePartName(text.Length);
+                SkipSpace(text.Length);
+                if (Pos >= text.Length || text[Pos] != '=') throw Fail("'=' after the part's name");
+                Pos++;
+                int semi = NextSemicolon(Pos);
+                var terms = ParseSum(semi);
+                SkipSpace(semi);
+                if (Pos != semi) throw Fail("'+', '-', ';' or the end of the value");
+                if (!parts.TryAdd(name, terms.Count == 1 ? terms[0].Item1 : new SumExpr(terms.Select(t => t.Item1).ToArray())))
+                {
+                    Pos = at;
+                    throw Fail($"a new part (#{name} is defined twice)");
+                }
+                if (semi == text.Length) return parts;
+                Pos = semi + 1;
+            }
+        }
+
+        /// <summary>Every reference names a defined part, and no part is defined through itself.</summary>
+        public void CheckParts(Dictionary<int, ValueExpr> parts)
+        {
+            foreach (var r in _references)
+            {
+                if (!parts.ContainsKey(r.Name)) { Pos = r.Column; throw Fail($"a defined part (#{r.Name} is not defined after 'where')"); }
+            }
+            var state = new Dictionary<int, int>(); // 1: being visited, 2: done
+            void Visit(int name, PartExpr via)
+            {
+                if (state.TryGetValue(name, out int s))
+                {
+                    if (s == 1) { Pos = via.Column; throw Fail($"a part that does not contain itself (#{name} refers to itself)"); }
+                    return;
+                }
+                state[name] = 1;
+                foreach (var r in References(parts[name])) Visit(r.Name, r);
+                state[name] = 2;
+            }
+            foreach (var r in _references) Visit(r.Name, r);
+        }
+
+        private static IEnumerable<PartExpr> References(ValueExpr e)
+        {
+            var stack = new Stack<ValueExpr>();
+            stack.Push(e);
+            while (stack.Count > 0)
+            {
+                switch (stack.Pop())
+                {
+                    case PartExpr p: yield return p; break;
+                    case OptionsExpr o: foreach (var x in o.Left) stack.Push(x); foreach (var x in o.Right) stack.Push(x); break;
+                    case SumExpr s: foreach (var x in s.Terms) stack.Push(x); break;
+                    case NegateExpr n: stack.Push(n.Inner); break;
+                }
+            }
+        }
+
+        private int ParsePartName(int end)
+        {
+            Pos++;
+            int digits = Pos;
+            while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
+            if (Pos == digits || !int.TryParse(text.AsSpan(digits, Pos - digits), out int name)) { Pos = digits; throw Fail("the part's number after '#'"); }
+            return name;
+        }
+
+        private int NextSemicolon(int from)
+        {
+            int depth = 0;
+            for (int i = from; i < text.Length; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (ch == ';' && depth == 0) return i;
+            }
+            return text.Length;
         }
 
         private bool Peek(int end, string s) => Pos + s.Length <= end && string.CompareOrdinal(text, Pos, s, 0, s.Length) == 0;
@@ -84,6 +205,14 @@ public static class ValueNotation
                 var game = ParseBraced(open + 1, close);
                 Pos = close + 1;
                 return game;
+            }
+            if (c == '#')
+            {
+                int column = Pos;
+                var part = new PartExpr(ParsePartName(end), column);
+                FirstPart ??= part;
+                _references.Add(part);
+                return part;
             }
             if (c == '±')
             {
@@ -251,13 +380,94 @@ public static class ValueNotation
 
     // ------------------------------------------------------------------ out
 
-    /// <summary>Writes a canonical game in the published notation (Unicode, or words with <paramref name="ascii"/>).</summary>
+    /// <summary>Longest written form printed in full; larger values are written with shared parts.</summary>
+    public const int PlainLimit = 4000;
+
+    /// <summary>Parts written out longer than this get a name in the shared form.</summary>
+    private const int NameAbove = 60;
+
+    /// <summary>
+    /// Writes a canonical game in the published notation (Unicode, or words with
+    /// <paramref name="ascii"/>). Written out in full, a game's text can grow exponentially with
+    /// its birthday even when it has few distinct subgames, so when the full text would exceed
+    /// <see cref="PlainLimit"/> characters the game is written in a shared form instead: every
+    /// long part appears once, under a name, e.g. <c>{#1,#2|#3} where #1 = {1|#3}; #2 = …</c>
+    /// (docs/values.md).
+    /// </summary>
     public static string Format(GameStore store, Game g, bool ascii = false)
     {
-        var sb = new StringBuilder();
+        var lengths = new Dictionary<Game, long>();
+        if (EstimateLength(store, g, lengths) <= PlainLimit) return FormatPlain(store, g, ascii);
+        return FormatShared(store, g, ascii, lengths);
+    }
+
+    private static string FormatPlain(GameStore store, Game g, bool ascii)
+    {
         var (inner, bars) = FormatPart(store, g, ascii);
-        if (bars > 0) sb.Append('{').Append(inner).Append('}');
-        else sb.Append(inner);
+        return bars > 0 ? "{" + inner + "}" : inner;
+    }
+
+    private static bool IsAtom(GameStore store, Game g) =>
+        store.IsNumber(g) || store.TryGetUpStar(g, out _, out _, out _) || store.IsSwitch(g);
+
+    /// <summary>Roughly how long the full text of g is (saturating, so huge forms do not overflow).</summary>
+    private static long EstimateLength(GameStore store, Game g, Dictionary<Game, long> lengths)
+    {
+        if (lengths.TryGetValue(g, out long known)) return known;
+        long n;
+        if (IsAtom(store, g)) n = FormatPlain(store, g, ascii: true).Length;
+        else
+        {
+            n = 3;
+            foreach (var o in store.LeftOptions(g)) n = Math.Min(n + EstimateLength(store, o, lengths) + 1, long.MaxValue / 4);
+            foreach (var o in store.RightOptions(g)) n = Math.Min(n + EstimateLength(store, o, lengths) + 1, long.MaxValue / 4);
+        }
+        lengths[g] = n;
+        return n;
+    }
+
+    private static string FormatShared(GameStore store, Game root, bool ascii, Dictionary<Game, long> lengths)
+    {
+        var names = new Dictionary<Game, int>();
+        var order = new List<Game>();
+        bool Named(Game g) => !IsAtom(store, g) && lengths[g] > NameAbove;
+        string Name(Game g)
+        {
+            if (!names.TryGetValue(g, out int k))
+            {
+                k = names.Count + 1;
+                names[g] = k;
+                order.Add(g);
+            }
+            return "#" + k;
+        }
+        (string Text, int Bars) Part(Game g)
+        {
+            if (IsAtom(store, g)) return FormatPart(store, g, ascii);
+            var left = store.LeftOptions(g);
+            var right = store.RightOptions(g);
+            var (lt, lb) = Side(left);
+            var (rt, rb) = Side(right);
+            int bars = Math.Max(lb, rb) + 1;
+            return (lt + new string('|', bars) + rt, bars);
+        }
+        (string Text, int Bars) Side(IReadOnlyList<Game> options)
+        {
+            if (options.Count == 1 && !Named(options[0])) return Part(options[0]);
+            return (string.Join(",", options.Select(o => Named(o) ? Name(o) : Whole(o))), 0);
+        }
+        string Whole(Game g)
+        {
+            var (t, bars) = Part(g);
+            return bars > 0 ? "{" + t + "}" : t;
+        }
+        var sb = new StringBuilder(Whole(root));
+        // Definitions in order of first use; writing one may name further parts.
+        for (int i = 0; i < order.Count; i++)
+        {
+            sb.Append(i == 0 ? " where " : "; ");
+            sb.Append('#').Append(i + 1).Append(" = ").Append(Whole(order[i]));
+        }
         return sb.ToString();
     }
 
@@ -284,7 +494,7 @@ public static class ValueNotation
             var (t, b) = FormatPart(store, options[0], ascii);
             return (t, b);
         }
-        return (string.Join(",", options.Select(o => Format(store, o, ascii))), 0);
+        return (string.Join(",", options.Select(o => FormatPlain(store, o, ascii))), 0);
     }
 
     private static string FormatUpStar(Dyadic x, int n, int m, bool ascii)
@@ -312,6 +522,8 @@ public static class ValueExprWriter
         SwitchExpr s => ascii ? $"{{{s.X}|{-s.X}}}" : "±" + s.X,
         OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
         SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
+        PartExpr p => "#" + p.Name,
+        SharedExpr s => Write(s.Body, ascii) + " where " + string.Join("; ", s.Parts.OrderBy(kv => kv.Key).Select(kv => $"#{kv.Key} = {Write(kv.Value, ascii)}")),
         NegateExpr n => n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u && (u.X.IsZero || u.Ups == 0)) ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
         _ => throw new ArgumentException($"unknown expression {expr}"),
     };

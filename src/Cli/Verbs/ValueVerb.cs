@@ -20,8 +20,13 @@ public static class ValueVerb
         command.SetAction(parse => Failures.Guard(() =>
         {
             var text = PositionInput.Read(parse.GetValue(position)!);
-            var report = BigStack.Run(() => Analyse(parse.GetValue(ruleset)!, text, parse.GetValue(ascii), parse.GetValue(DbOption.Option)));
-            Console.Out.WriteLine(parse.GetValue(json) ? report.ToJson() : report.ToText());
+            // Deep values recurse in the store and in the writer alike: both run on the big stack.
+            var output = BigStack.Run(() =>
+            {
+                var report = Analyse(parse.GetValue(ruleset)!, text, parse.GetValue(ascii), parse.GetValue(DbOption.Option));
+                return parse.GetValue(json) ? report.ToJson() : report.ToText();
+            });
+            Console.Out.WriteLine(output);
             return Entry.Success;
         }));
         return command;
