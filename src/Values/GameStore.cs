@@ -30,7 +30,7 @@ public sealed partial class GameStore
     // Operation caches keyed by id pairs packed into a long (first id in the high half).
     // long's own hash is the XOR of its halves, so every pair (a, b) with the same a ^ b would
     // share a bucket: the packed keys get a multiplicative hash instead.
-    private readonly Dictionary<long, bool> _leq = new(PairHash.Instance);
+    private readonly PairTable _leq = new();
     private readonly Dictionary<long, int> _sum = new(PairHash.Instance);
     private readonly List<int> _negative = new();
     private readonly List<int> _birthday = new();
@@ -455,7 +455,7 @@ public sealed partial class GameStore
         if (_ls[a] > _ls[b] || _rs[a] > _rs[b]) return false;
         if (_ls[a] < _rs[b]) return true;
         long key = Pack(a, b);
-        if (_leq.TryGetValue(key, out bool known)) return known;
+        if (_leq.TryGet(key, out bool known)) return known;
         bool result = true;
         if (ka != NumberKind)
         {
@@ -466,7 +466,7 @@ public sealed partial class GameStore
         {
             foreach (int br in RightIds(b)) if (Leq(br, a)) { result = false; break; }
         }
-        _leq[key] = result;
+        _leq.Set(key, result);
         return result;
     }
 
