@@ -12,24 +12,35 @@ internal sealed class PairTable
     private ulong[] _slots = new ulong[1 << 12];
     private int _count;
 
+    // A small direct-mapped copy of recent answers in front of the big table: comparisons
+    // recurse through the same few pairs again and again, and this array stays in the CPU's
+    // cache where the big table does not.
+    private const int RecentBits = 15;
+    private readonly ulong[] _recent = new ulong[1 << RecentBits];
+
     public int Count => _count;
 
     public bool TryGet(long pair, out bool answer)
     {
         ulong want = (ulong)pair << 1;
+        int hash = Hash(pair);
+        ref ulong recent = ref _recent[hash >> (31 - RecentBits)];
+        if ((recent & ~1UL) == want && want != 0) { answer = (recent & 1) != 0; return true; }
         int mask = _slots.Length - 1;
-        for (int i = Hash(pair) & mask; ; i = (i + 1) & mask)
+        for (int i = hash & mask; ; i = (i + 1) & mask)
         {
             ulong slot = _slots[i];
             if (slot == 0) { answer = false; return false; }
-            if ((slot & ~1UL) == want) { answer = (slot & 1) != 0; return true; }
+            if ((slot & ~1UL) == want) { recent = slot; answer = (slot & 1) != 0; return true; }
         }
     }
 
     public void Set(long pair, bool answer)
     {
         if (2 * (_count + 1) > _slots.Length) Grow();
-        if (Insert(_slots, (ulong)pair << 1 | (answer ? 1UL : 0UL))) _count++;
+        ulong value = (ulong)pair << 1 | (answer ? 1UL : 0UL);
+        if (Insert(_slots, value)) _count++;
+        _recent[Hash(pair) >> (31 - RecentBits)] = value;
     }
 
     private static int Hash(long pair) => (int)(((ulong)pair * 0x9E3779B97F4A7C15UL) >> 33);
