@@ -67,7 +67,7 @@ public sealed class ValueReport(GameStore store, Game value, IReadOnlyList<(stri
         {
             w.WriteLine($"components   {components.Count}");
             int i = 1;
-            foreach (var (text, v) in components) w.WriteLine($"  {i++,3}. {text}  =  {v}");
+            foreach (var (text, v) in components) w.WriteLine($"  {i++,3}. {Shorten(text)}  =  {v}");
         }
         return w.ToString().TrimEnd();
     }
@@ -90,6 +90,10 @@ public sealed class ValueReport(GameStore store, Game value, IReadOnlyList<(stri
         o["components"] = list;
         return o.ToJsonString(new JsonSerializerOptions { Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
     }
+
+    /// <summary>Component text for people: a long one is cut (the JSON keeps it whole).</summary>
+    private static string Shorten(string text) =>
+        text.Length <= 160 ? text : $"{text[..100]}… ({text.Length:N0} characters)";
 
     public static string Describe(Outcome o) => o switch
     {
