@@ -19,19 +19,9 @@ public static class ValueNotation
     public static IReadOnlyList<(ValueExpr Term, int Column)> ParseTerms(string text)
     {
         var p = new Parser(text);
-        int where = p.FindWhere();
-        int end = where < 0 ? text.Length : where;
-        var terms = p.ParseSum(end);
-        p.SkipSpace(end);
-        if (p.Pos < end) throw p.Fail(where < 0 ? "'+', '-', 'where' or the end of the value" : "'+', '-' or 'where'");
-        if (where < 0)
-        {
-            if (p.FirstPart is { } stray) { p.Pos = stray.Column; throw p.Fail($"a value (#{stray.Name} is a named part, and there is no 'where' to define it)"); }
-            return terms;
-        }
-        var parts = p.ParseParts(where + Parser.WhereWord.Length);
-        p.CheckParts(parts);
-        return terms.Select(t => ((ValueExpr)new SharedExpr(t.Item1, parts), t.Item2)).ToList();
+        var (terms, parts) = p.ParseScope(0, text.Length, nested: false);
+        if (parts is null) return terms;
+        return terms.Select(t => (SharedExpr.Around(t.Item1, parts), t.Item2)).ToList();
     }
 
     private sealed class Parser(string text)
@@ -47,43 +37,79 @@ public static class ValueNotation
 
         public const string WhereWord = "where";
 
-        /// <summary>The first named part met while parsing, so a stray reference is caught.</summary>
-        public PartExpr? FirstPart;
+        // The references met in the scope being parsed (a whole text, or a parenthesised
+        // 'where' form): each scope's names are its own.
+        private List<PartExpr> _references = new();
 
-        private readonly List<PartExpr> _references = new();
+        /// <summary>
+        /// [start, end) as a sum, with an optional 'where' clause naming parts used in it:
+        /// the terms, and the parts (null without 'where').
+        /// </summary>
+        public (List<(ValueExpr, int)> Terms, Dictionary<int, ValueExpr>? Parts) ParseScope(int start, int end, bool nested)
+        {
+            int where = FindWhere(start, end);
+            // Brackets without 'where' are no scope of their own: their names are the enclosing ones.
+            var outer = _references;
+            if (where >= 0 || !nested) _references = new List<PartExpr>();
+            try
+            {
+                Pos = start;
+                int bodyEnd = where < 0 ? end : where;
+                var terms = ParseSum(bodyEnd);
+                SkipSpace(bodyEnd);
+                if (Pos < bodyEnd) throw Fail(where >= 0 ? "'+', '-' or 'where'" : nested ? "'+', '-', 'where' or ')'" : "'+', '-', 'where' or the end of the value");
+                if (where < 0)
+                {
+                    if (!nested && _references.Count > 0)
+                    {
+                        var stray = _references[0];
+                        Pos = stray.Column;
+                        throw Fail($"a value (#{stray.Name} is a named part, and there is no 'where' to define it)");
+                    }
+                    return (terms, null);
+                }
+                var parts = ParseParts(where + WhereWord.Length, end);
+                CheckParts(parts);
+                return (terms, parts);
+            }
+            finally
+            {
+                _references = outer;
+            }
+        }
 
-        /// <summary>Start of the top-level word 'where' (outside all brackets), or -1.</summary>
-        public int FindWhere()
+        /// <summary>Start of the word 'where' in [start, end) outside all brackets, or -1.</summary>
+        private int FindWhere(int start, int end)
         {
             int depth = 0;
-            for (int i = 0; i + WhereWord.Length <= text.Length; i++)
+            for (int i = start; i + WhereWord.Length <= end; i++)
             {
                 char ch = text[i];
                 if (ch == '{' || ch == '(') depth++;
                 else if (ch == '}' || ch == ')') depth--;
                 else if (depth == 0 && string.CompareOrdinal(text, i, WhereWord, 0, WhereWord.Length) == 0
                     && (i == 0 || !char.IsLetter(text[i - 1]))
-                    && (i + WhereWord.Length == text.Length || !char.IsLetter(text[i + WhereWord.Length])))
+                    && (i + WhereWord.Length == end || !char.IsLetter(text[i + WhereWord.Length])))
                     return i;
             }
             return -1;
         }
 
         /// <summary>The definitions after 'where': <c>#k = value</c>, separated by ';'.</summary>
-        public Dictionary<int, ValueExpr> ParseParts(int start)
+        private Dictionary<int, ValueExpr> ParseParts(int start, int end)
         {
             var parts = new Dictionary<int, ValueExpr>();
             Pos = start;
             while (true)
             {
-                SkipSpace(text.Length);
+                SkipSpace(end);
                 int at = Pos;
-                if (Pos >= text.Length || text[Pos] != '#') throw Fail("a named part such as '#1 = {1|0}'");
-                int name = ParsePartName(text.Length);
-                SkipSpace(text.Length);
-                if (Pos >= text.Length || text[Pos] != '=') throw Fail("'=' after the part's name");
+                if (Pos >= end || text[Pos] != '#') throw Fail("a named part such as '#1 = {1|0}'");
+                int name = ParsePartName(end);
+                SkipSpace(end);
+                if (Pos >= end || text[Pos] != '=') throw Fail("'=' after the part's name");
                 Pos++;
-                int semi = NextSemicolon(Pos);
+                int semi = NextSemicolon(Pos, end);
                 var terms = ParseSum(semi);
                 SkipSpace(semi);
                 if (Pos != semi) throw Fail("'+', '-', ';' or the end of the value");
@@ -92,13 +118,13 @@ public static class ValueNotation
                     Pos = at;
                     throw Fail($"a new part (#{name} is defined twice)");
                 }
-                if (semi == text.Length) return parts;
+                if (semi == end) return parts;
                 Pos = semi + 1;
             }
         }
 
         /// <summary>Every reference names a defined part, and no part is defined through itself.</summary>
-        public void CheckParts(Dictionary<int, ValueExpr> parts)
+        private void CheckParts(Dictionary<int, ValueExpr> parts)
         {
             foreach (var r in _references)
             {
@@ -113,26 +139,10 @@ public static class ValueNotation
                     return;
                 }
                 state[name] = 1;
-                foreach (var r in References(parts[name])) Visit(r.Name, r);
+                foreach (var r in SharedExpr.References(parts[name])) Visit(r.Name, r);
                 state[name] = 2;
             }
             foreach (var r in _references) Visit(r.Name, r);
-        }
-
-        private static IEnumerable<PartExpr> References(ValueExpr e)
-        {
-            var stack = new Stack<ValueExpr>();
-            stack.Push(e);
-            while (stack.Count > 0)
-            {
-                switch (stack.Pop())
-                {
-                    case PartExpr p: yield return p; break;
-                    case OptionsExpr o: foreach (var x in o.Left) stack.Push(x); foreach (var x in o.Right) stack.Push(x); break;
-                    case SumExpr s: foreach (var x in s.Terms) stack.Push(x); break;
-                    case NegateExpr n: stack.Push(n.Inner); break;
-                }
-            }
         }
 
         private int ParsePartName(int end)
@@ -144,17 +154,17 @@ public static class ValueNotation
             return name;
         }
 
-        private int NextSemicolon(int from)
+        private int NextSemicolon(int from, int end)
         {
             int depth = 0;
-            for (int i = from; i < text.Length; i++)
+            for (int i = from; i < end; i++)
             {
                 char ch = text[i];
                 if (ch == '{' || ch == '(') depth++;
                 else if (ch == '}' || ch == ')') depth--;
                 else if (ch == ';' && depth == 0) return i;
             }
-            return text.Length;
+            return end;
         }
 
         private bool Peek(int end, string s) => Pos + s.Length <= end && string.CompareOrdinal(text, Pos, s, 0, s.Length) == 0;
@@ -191,12 +201,10 @@ public static class ValueNotation
             if (c == '(')
             {
                 int close = Matching(Pos, end, '(', ')');
-                Pos++;
-                var inner = ParseSum(close);
-                SkipSpace(close);
-                if (Pos != close) throw Fail("')'");
+                var (inner, parts) = ParseScope(Pos + 1, close, nested: true);
                 Pos = close + 1;
-                return inner.Count == 1 ? inner[0].Item1 : new SumExpr(inner.Select(t => t.Item1).ToArray());
+                var body = inner.Count == 1 ? inner[0].Item1 : new SumExpr(inner.Select(t => t.Item1).ToArray());
+                return parts is null ? body : SharedExpr.Around(body, parts);
             }
             if (c == '{')
             {
@@ -210,7 +218,6 @@ public static class ValueNotation
             {
                 int column = Pos;
                 var part = new PartExpr(ParsePartName(end), column);
-                FirstPart ??= part;
                 _references.Add(part);
                 return part;
             }
@@ -523,7 +530,7 @@ public static class ValueExprWriter
         OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
         SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
         PartExpr p => "#" + p.Name,
-        SharedExpr s => Write(s.Body, ascii) + " where " + string.Join("; ", s.Parts.OrderBy(kv => kv.Key).Select(kv => $"#{kv.Key} = {Write(kv.Value, ascii)}")),
+        SharedExpr s => "(" + Write(s.Body, ascii) + " where " + string.Join("; ", s.Parts.OrderBy(kv => kv.Key).Select(kv => $"#{kv.Key} = {Write(kv.Value, ascii)}")) + ")",
         NegateExpr n => n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u && (u.X.IsZero || u.Ups == 0)) ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
         _ => throw new ArgumentException($"unknown expression {expr}"),
     };

@@ -92,3 +92,27 @@ public class SharedFormTests
         Assert.Contains(said, e.Expected);
     }
 }
+
+public class ScopedSharedFormTests
+{
+    private readonly GameStore _store = new();
+
+    [Fact]
+    public void ParenthesisedSharedFormsHaveTheirOwnNames()
+    {
+        // Each bracketed 'where' names its own parts; #1 means different games in the two terms.
+        var sum = _store.Parse("({#1|0} where #1 = {1|0}) + ({#1|#1} where #1 = ↑)");
+        Assert.Equal(_store.Parse("{{1|0}|0} + {↑|↑}"), sum);
+        var e = Assert.Throws<ValueSyntaxException>(() => _store.Parse("({#1|0} where #1 = 1) + #1"));
+        Assert.Equal(24, e.Column);
+        Assert.Contains("no 'where'", e.Expected);
+    }
+
+    [Fact]
+    public void WrittenExpressionsOfSharedFormsReadBack()
+    {
+        var expr = ValueNotation.Parse("{#1,↑|#2} where #1 = {1|0}; #2 = -#1");
+        string written = ValueExprWriter.Write(expr);
+        Assert.Equal(_store.Evaluate(expr), _store.Parse(written));
+    }
+}
