@@ -20,6 +20,8 @@ public sealed partial class GameStore
     private Game AtomicWeightOfAllSmall(Game g)
     {
         if (g == Zero) return Zero;
+        // aw(n·↑ + *m) = n: atomic weight is additive, aw(↑) = 1 and aw(*m) = 0.
+        if (_tag[g.Id] is { X.IsZero: true } t) return Integer(t.N);
         if (_atomicWeight.TryGetValue(g.Id, out int id)) return new Game(id);
         var two = Integer(2);
         var minusTwo = Integer(-2);

@@ -30,7 +30,7 @@ public sealed partial class GameStore
     // Operation caches keyed by id pairs packed into a long (first id in the high half).
     // long's own hash is the XOR of its halves, so every pair (a, b) with the same a ^ b would
     // share a bucket: the packed keys get a multiplicative hash instead.
-    private readonly Dictionary<long, bool> _leq = new(PairHash.Instance);
+    private readonly PairTable _leq = new();
     private readonly Dictionary<long, int> _sum = new(PairHash.Instance);
     private readonly List<int> _negative = new();
     private readonly List<int> _birthday = new();
@@ -86,18 +86,9 @@ public sealed partial class GameStore
         }
         else if (n == 0)
         {
-            // *m = {0, *, ..., *(m-1) | 0, *, ..., *(m-1)}: the options are canonical and none
-            // dominates or reverses, so the record is written directly rather than simplified.
-            var lower = new int[m];
-            for (int i = 0; i < m; i++) lower[i] = Nimber(i).Id;
-            Array.Sort(lower);
-            var key = new OptionKey(lower, (int[])lower.Clone());
-            if (!_byOptions.TryGetValue(key, out int nid))
-            {
-                nid = NewRecord(key.Left, key.Right, null);
-                _byOptions.Add(key, nid);
-            }
-            g = new Game(nid);
+            // *m = {0, *, ..., *(m-1) | 0, *, ..., *(m-1)}: the record is written directly and
+            // its options only on request (a green graph can have a nim-value in the millions).
+            g = new Game(NewRecord(null, null, null));
         }
         else if (n < 0)
         {
@@ -198,11 +189,11 @@ public sealed partial class GameStore
             }
         }
         if (TryNumberRule(l, r, out var number)) return number;
+        if (NimberPattern(l, r) is int m) return Nimber(m);
         var key = new OptionKey(l.ToArray(), r.ToArray());
         if (_byOptions.TryGetValue(key, out int id)) return new Game(id);
         id = NewRecord(key.Left, key.Right, null);
         _byOptions.Add(key, id);
-        InferNimber(id, key.Left, key.Right);
         return new Game(id);
     }
 
@@ -276,19 +267,20 @@ public sealed partial class GameStore
         return result;
     }
 
-    private void InferNimber(int id, int[] l, int[] r)
+    /// <summary>m when the options are exactly {0, *, ..., *(m-1) | the same}, else null.</summary>
+    private int? NimberPattern(List<int> l, List<int> r)
     {
-        // *m = {0, *, ..., *(m-1) | same}: recognised on sight so nimbers built by hand are tagged too.
-        if (l.Length != r.Length) return;
-        for (int i = 0; i < l.Length; i++)
+        // Nimber records are never in the option index (their options are made on request),
+        // so a simplification that lands on *m must be caught here, or *m would get a second id.
+        if (l.Count != r.Count) return null;
+        int m = l.Count;
+        for (int i = 0; i < m; i++)
         {
-            if (l[i] != r[i] || _tag[l[i]] is not { } t || !t.X.IsZero || t.N != 0) return;
+            if (l[i] != r[i] || _tag[l[i]] is not { } t || !t.X.IsZero || t.N != 0 || t.M >= m) return null;
         }
-        var ms = l.Select(i => _tag[i]!.Value.M).OrderBy(m => m).ToArray();
-        for (int i = 0; i < ms.Length; i++) if (ms[i] != i) return;
-        var tag = new UpStarTag(Dyadic.Zero, 0, ms.Length);
-        SetTag(id, tag);
-        _upStars.TryAdd(tag, id);
+        // m distinct nimbers all below *m (ids are unique and equal ids are equal values) are
+        // exactly 0, *, ..., *(m-1).
+        return m;
     }
 
     private int NewRecord(int[]? left, int[]? right, Dyadic? number)
@@ -311,6 +303,10 @@ public sealed partial class GameStore
     {
         _tag[id] = tag;
         if (_kind[id] == General) _kind[id] = TaggedKind;
+        // x + n·↑ + *m is x plus an infinitesimal: both stops are x.
+        _ls[id] = tag.X;
+        _rs[id] = tag.X;
+        _stopsKnown[id] = true;
     }
 
     private static void SortUnique(List<int> list)
@@ -324,11 +320,22 @@ public sealed partial class GameStore
 
     // ---------------------------------------------------------------- options
 
-    internal int[] LeftIds(int id) => _left[id] ?? MaterialiseNumberOptions(id).Left;
-    internal int[] RightIds(int id) => _right[id] ?? MaterialiseNumberOptions(id).Right;
+    internal int[] LeftIds(int id) => _left[id] ?? MaterialiseOptions(id).Left;
+    internal int[] RightIds(int id) => _right[id] ?? MaterialiseOptions(id).Right;
 
-    private (int[] Left, int[] Right) MaterialiseNumberOptions(int id)
+    private (int[] Left, int[] Right) MaterialiseOptions(int id)
     {
+        if (_number[id] is null)
+        {
+            // A nimber *m: {0, *, ..., *(m-1) | the same}, each option itself made lazily.
+            int m = _tag[id]!.Value.M;
+            var options = new int[m];
+            for (int i = 0; i < m; i++) options[i] = Nimber(i).Id;
+            Array.Sort(options);
+            _left[id] = options;
+            _right[id] = options;
+            return (options, options);
+        }
         var x = _number[id]!.Value;
         int[] l, r;
         if (x.IsZero) { l = []; r = []; }
@@ -362,6 +369,8 @@ public sealed partial class GameStore
         if (cached >= 0) return new Game(cached);
         Game result;
         if (_number[g.Id] is { } x) result = Number(-x);
+        else if (_tag[g.Id] is { X.IsZero: true, N: 0 }) result = g;
+        else if (_tag[g.Id] is { } tag && _upStars.TryGetValue(new UpStarTag(-tag.X, -tag.N, tag.M), out int known)) result = new Game(known);
         else
         {
             // The negative of a canonical form is canonical: swap and negate, no simplification needed.
@@ -374,7 +383,6 @@ public sealed partial class GameStore
             {
                 id = NewRecord(nl, nr, null);
                 _byOptions.Add(key, id);
-                InferNimber(id, nl, nr);
             }
             result = new Game(id);
             if (_tag[g.Id] is { } t && _tag[id] is null)
@@ -455,7 +463,7 @@ public sealed partial class GameStore
         if (_ls[a] > _ls[b] || _rs[a] > _rs[b]) return false;
         if (_ls[a] < _rs[b]) return true;
         long key = Pack(a, b);
-        if (_leq.TryGetValue(key, out bool known)) return known;
+        if (_leq.TryGet(key, out bool known)) return known;
         bool result = true;
         if (ka != NumberKind)
         {
@@ -466,7 +474,7 @@ public sealed partial class GameStore
         {
             foreach (int br in RightIds(b)) if (Leq(br, a)) { result = false; break; }
         }
-        _leq[key] = result;
+        _leq.Set(key, result);
         return result;
     }
 
@@ -532,6 +540,7 @@ public sealed partial class GameStore
     {
         if (g == Zero) return true;
         if (IsNumber(g)) return false;
+        if (_tag[g.Id] is { } t) return t.X.IsZero;
         var l = LeftIds(g.Id);
         var r = RightIds(g.Id);
         if (l.Length == 0 || r.Length == 0) return false;
@@ -553,6 +562,7 @@ public sealed partial class GameStore
             var abs = x.Abs();
             b = abs.IsInteger ? (int)abs.Numerator : (int)abs.Floor() + 1 + abs.Exponent;
         }
+        else if (_tag[g.Id] is { X.IsZero: true, N: 0 } nim) b = nim.M;
         else
         {
             b = 0;

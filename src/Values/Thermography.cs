@@ -21,6 +21,13 @@ public sealed partial class GameStore
             var wall = Trajectory.Constant(x);
             result = new Thermograph(wall, wall, NumberTemperature(x), x);
         }
+        else if (TryGetUpStar(g, out var ix, out _, out _) && _tag[g.Id] is not null)
+        {
+            // x plus an infinitesimal: temperature 0, both walls the mast at x (no need to walk
+            // the options, which for *m are m nimbers).
+            var wall = Trajectory.Constant(ix);
+            result = new Thermograph(wall, wall, Dyadic.Zero, ix);
+        }
         else
         {
             Trajectory? ls = null, rs = null;

@@ -24,3 +24,50 @@ public sealed record SumExpr(IReadOnlyList<ValueExpr> Terms) : ValueExpr;
 
 /// <summary>-G.</summary>
 public sealed record NegateExpr(ValueExpr Inner) : ValueExpr;
+
+/// <summary>A named part of a shared form, <c>#k</c>, at a 0-based column of the text.</summary>
+public sealed record PartExpr(int Name, int Column) : ValueExpr;
+
+/// <summary>
+/// A value written with shared parts: <c>body where #1 = …; #2 = …</c>. Large canonical forms
+/// are written this way so that each distinct subgame appears once (docs/values.md).
+/// </summary>
+public sealed record SharedExpr(ValueExpr Body, IReadOnlyDictionary<int, ValueExpr> Parts) : ValueExpr
+{
+    /// <summary>
+    /// <paramref name="body"/> with the parts it reaches, directly or through other parts: the
+    /// body itself when it names none, else a shared form holding only those parts.
+    /// </summary>
+    public static ValueExpr Around(ValueExpr body, IReadOnlyDictionary<int, ValueExpr> parts)
+    {
+        var used = new SortedDictionary<int, ValueExpr>();
+        var pending = new Stack<ValueExpr>([body]);
+        while (pending.Count > 0)
+        {
+            foreach (var r in References(pending.Pop()))
+            {
+                if (used.ContainsKey(r.Name) || !parts.TryGetValue(r.Name, out var part)) continue;
+                used[r.Name] = part;
+                pending.Push(part);
+            }
+        }
+        return used.Count == 0 ? body : new SharedExpr(body, used);
+    }
+
+    /// <summary>The named parts an expression refers to directly (not inside nested shared forms).</summary>
+    public static IEnumerable<PartExpr> References(ValueExpr e)
+    {
+        var stack = new Stack<ValueExpr>();
+        stack.Push(e);
+        while (stack.Count > 0)
+        {
+            switch (stack.Pop())
+            {
+                case PartExpr p: yield return p; break;
+                case OptionsExpr o: foreach (var x in o.Left) stack.Push(x); foreach (var x in o.Right) stack.Push(x); break;
+                case SumExpr s: foreach (var x in s.Terms) stack.Push(x); break;
+                case NegateExpr n: stack.Push(n.Inner); break;
+            }
+        }
+    }
+}

@@ -19,10 +19,9 @@ public static class ValueNotation
     public static IReadOnlyList<(ValueExpr Term, int Column)> ParseTerms(string text)
     {
         var p = new Parser(text);
-        var terms = p.ParseSum(text.Length);
-        p.SkipSpace(text.Length);
-        if (p.Pos < text.Length) throw p.Fail("'+', '-' or the end of the value");
-        return terms;
+        var (terms, parts) = p.ParseScope(0, text.Length, nested: false);
+        if (parts is null) return terms;
+        return terms.Select(t => (SharedExpr.Around(t.Item1, parts), t.Item2)).ToList();
     }
 
     private sealed class Parser(string text)
@@ -34,6 +33,138 @@ public static class ValueNotation
         public void SkipSpace(int end)
         {
             while (Pos < end && char.IsWhiteSpace(text[Pos])) Pos++;
+        }
+
+        public const string WhereWord = "where";
+
+        // The references met in the scope being parsed (a whole text, or a parenthesised
+        // 'where' form): each scope's names are its own.
+        private List<PartExpr> _references = new();
+
+        /// <summary>
+        /// [start, end) as a sum, with an optional 'where' clause naming parts used in it:
+        /// the terms, and the parts (null without 'where').
+        /// </summary>
+        public (List<(ValueExpr, int)> Terms, Dictionary<int, ValueExpr>? Parts) ParseScope(int start, int end, bool nested)
+        {
+            int where = FindWhere(start, end);
+            // Brackets without 'where' are no scope of their own: their names are the enclosing ones.
+            var outer = _references;
+            if (where >= 0 || !nested) _references = new List<PartExpr>();
+            try
+            {
+                Pos = start;
+                int bodyEnd = where < 0 ? end : where;
+                var terms = ParseSum(bodyEnd);
+                SkipSpace(bodyEnd);
+                if (Pos < bodyEnd) throw Fail(where >= 0 ? "'+', '-' or 'where'" : nested ? "'+', '-', 'where' or ')'" : "'+', '-', 'where' or the end of the value");
+                if (where < 0)
+                {
+                    if (!nested && _references.Count > 0)
+                    {
+                        var stray = _references[0];
+                        Pos = stray.Column;
+                        throw Fail($"a value (#{stray.Name} is a named part, and there is no 'where' to define it)");
+                    }
+                    return (terms, null);
+                }
+                var parts = ParseParts(where + WhereWord.Length, end);
+                CheckParts(parts);
+                return (terms, parts);
+            }
+            finally
+            {
+                _references = outer;
+            }
+        }
+
+        /// <summary>Start of the word 'where' in [start, end) outside all brackets, or -1.</summary>
+        private int FindWhere(int start, int end)
+        {
+            int depth = 0;
+            for (int i = start; i + WhereWord.Length <= end; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (depth == 0 && string.CompareOrdinal(text, i, WhereWord, 0, WhereWord.Length) == 0
+                    && (i == 0 || !char.IsLetter(text[i - 1]))
+                    && (i + WhereWord.Length == end || !char.IsLetter(text[i + WhereWord.Length])))
+                    return i;
+            }
+            return -1;
+        }
+
+        /// <summary>The definitions after 'where': <c>#k = value</c>, separated by ';'.</summary>
+        private Dictionary<int, ValueExpr> ParseParts(int start, int end)
+        {
+            var parts = new Dictionary<int, ValueExpr>();
+            Pos = start;
+            while (true)
+            {
+                SkipSpace(end);
+                int at = Pos;
+                if (Pos >= end || text[Pos] != '#') throw Fail("a named part such as '#1 = {1|0}'");
+                int name = ParsePartName(end);
+                SkipSpace(end);
+                if (Pos >= end || text[Pos] != '=') throw Fail("'=' after the part's name");
+                Pos++;
+                int semi = NextSemicolon(Pos, end);
+                var terms = ParseSum(semi);
+                SkipSpace(semi);
+                if (Pos != semi) throw Fail("'+', '-', ';' or the end of the value");
+                if (!parts.TryAdd(name, terms.Count == 1 ? terms[0].Item1 : new SumExpr(terms.Select(t => t.Item1).ToArray())))
+                {
+                    Pos = at;
+                    throw Fail($"a new part (#{name} is defined twice)");
+                }
+                if (semi == end) return parts;
+                Pos = semi + 1;
+            }
+        }
+
+        /// <summary>Every reference names a defined part, and no part is defined through itself.</summary>
+        private void CheckParts(Dictionary<int, ValueExpr> parts)
+        {
+            foreach (var r in _references)
+            {
+                if (!parts.ContainsKey(r.Name)) { Pos = r.Column; throw Fail($"a defined part (#{r.Name} is not defined after 'where')"); }
+            }
+            var state = new Dictionary<int, int>(); // 1: being visited, 2: done
+            void Visit(int name, PartExpr via)
+            {
+                if (state.TryGetValue(name, out int s))
+                {
+                    if (s == 1) { Pos = via.Column; throw Fail($"a part that does not contain itself (#{name} refers to itself)"); }
+                    return;
+                }
+                state[name] = 1;
+                foreach (var r in SharedExpr.References(parts[name])) Visit(r.Name, r);
+                state[name] = 2;
+            }
+            foreach (var r in _references) Visit(r.Name, r);
+        }
+
+        private int ParsePartName(int end)
+        {
+            Pos++;
+            int digits = Pos;
+            while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
+            if (Pos == digits || !int.TryParse(text.AsSpan(digits, Pos - digits), out int name)) { Pos = digits; throw Fail("the part's number after '#'"); }
+            return name;
+        }
+
+        private int NextSemicolon(int from, int end)
+        {
+            int depth = 0;
+            for (int i = from; i < end; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(') depth++;
+                else if (ch == '}' || ch == ')') depth--;
+                else if (ch == ';' && depth == 0) return i;
+            }
+            return end;
         }
 
         private bool Peek(int end, string s) => Pos + s.Length <= end && string.CompareOrdinal(text, Pos, s, 0, s.Length) == 0;
@@ -70,12 +201,10 @@ public static class ValueNotation
             if (c == '(')
             {
                 int close = Matching(Pos, end, '(', ')');
-                Pos++;
-                var inner = ParseSum(close);
-                SkipSpace(close);
-                if (Pos != close) throw Fail("')'");
+                var (inner, parts) = ParseScope(Pos + 1, close, nested: true);
                 Pos = close + 1;
-                return inner.Count == 1 ? inner[0].Item1 : new SumExpr(inner.Select(t => t.Item1).ToArray());
+                var body = inner.Count == 1 ? inner[0].Item1 : new SumExpr(inner.Select(t => t.Item1).ToArray());
+                return parts is null ? body : SharedExpr.Around(body, parts);
             }
             if (c == '{')
             {
@@ -84,6 +213,13 @@ public static class ValueNotation
                 var game = ParseBraced(open + 1, close);
                 Pos = close + 1;
                 return game;
+            }
+            if (c == '#')
+            {
+                int column = Pos;
+                var part = new PartExpr(ParsePartName(end), column);
+                _references.Add(part);
+                return part;
             }
             if (c == '±')
             {
@@ -251,13 +387,94 @@ public static class ValueNotation
 
     // ------------------------------------------------------------------ out
 
-    /// <summary>Writes a canonical game in the published notation (Unicode, or words with <paramref name="ascii"/>).</summary>
+    /// <summary>Longest written form printed in full; larger values are written with shared parts.</summary>
+    public const int PlainLimit = 4000;
+
+    /// <summary>Parts written out longer than this get a name in the shared form.</summary>
+    private const int NameAbove = 60;
+
+    /// <summary>
+    /// Writes a canonical game in the published notation (Unicode, or words with
+    /// <paramref name="ascii"/>). Written out in full, a game's text can grow exponentially with
+    /// its birthday even when it has few distinct subgames, so when the full text would exceed
+    /// <see cref="PlainLimit"/> characters the game is written in a shared form instead: every
+    /// long part appears once, under a name, e.g. <c>{#1,#2|#3} where #1 = {1|#3}; #2 = …</c>
+    /// (docs/values.md).
+    /// </summary>
     public static string Format(GameStore store, Game g, bool ascii = false)
     {
-        var sb = new StringBuilder();
+        var lengths = new Dictionary<Game, long>();
+        if (EstimateLength(store, g, lengths) <= PlainLimit) return FormatPlain(store, g, ascii);
+        return FormatShared(store, g, ascii, lengths);
+    }
+
+    private static string FormatPlain(GameStore store, Game g, bool ascii)
+    {
         var (inner, bars) = FormatPart(store, g, ascii);
-        if (bars > 0) sb.Append('{').Append(inner).Append('}');
-        else sb.Append(inner);
+        return bars > 0 ? "{" + inner + "}" : inner;
+    }
+
+    private static bool IsAtom(GameStore store, Game g) =>
+        store.IsNumber(g) || store.TryGetUpStar(g, out _, out _, out _) || store.IsSwitch(g);
+
+    /// <summary>Roughly how long the full text of g is (saturating, so huge forms do not overflow).</summary>
+    private static long EstimateLength(GameStore store, Game g, Dictionary<Game, long> lengths)
+    {
+        if (lengths.TryGetValue(g, out long known)) return known;
+        long n;
+        if (IsAtom(store, g)) n = FormatPlain(store, g, ascii: true).Length;
+        else
+        {
+            n = 3;
+            foreach (var o in store.LeftOptions(g)) n = Math.Min(n + EstimateLength(store, o, lengths) + 1, long.MaxValue / 4);
+            foreach (var o in store.RightOptions(g)) n = Math.Min(n + EstimateLength(store, o, lengths) + 1, long.MaxValue / 4);
+        }
+        lengths[g] = n;
+        return n;
+    }
+
+    private static string FormatShared(GameStore store, Game root, bool ascii, Dictionary<Game, long> lengths)
+    {
+        var names = new Dictionary<Game, int>();
+        var order = new List<Game>();
+        bool Named(Game g) => !IsAtom(store, g) && lengths[g] > NameAbove;
+        string Name(Game g)
+        {
+            if (!names.TryGetValue(g, out int k))
+            {
+                k = names.Count + 1;
+                names[g] = k;
+                order.Add(g);
+            }
+            return "#" + k;
+        }
+        (string Text, int Bars) Part(Game g)
+        {
+            if (IsAtom(store, g)) return FormatPart(store, g, ascii);
+            var left = store.LeftOptions(g);
+            var right = store.RightOptions(g);
+            var (lt, lb) = Side(left);
+            var (rt, rb) = Side(right);
+            int bars = Math.Max(lb, rb) + 1;
+            return (lt + new string('|', bars) + rt, bars);
+        }
+        (string Text, int Bars) Side(IReadOnlyList<Game> options)
+        {
+            if (options.Count == 1 && !Named(options[0])) return Part(options[0]);
+            return (string.Join(",", options.Select(o => Named(o) ? Name(o) : Whole(o))), 0);
+        }
+        string Whole(Game g)
+        {
+            var (t, bars) = Part(g);
+            return bars > 0 ? "{" + t + "}" : t;
+        }
+        var sb = new StringBuilder(Whole(root));
+        // Definitions in order of first use; writing one may name further parts.
+        for (int i = 0; i < order.Count; i++)
+        {
+            sb.Append(i == 0 ? " where " : "; ");
+            sb.Append('#').Append(i + 1).Append(" = ").Append(Whole(order[i]));
+        }
         return sb.ToString();
     }
 
@@ -284,7 +501,7 @@ public static class ValueNotation
             var (t, b) = FormatPart(store, options[0], ascii);
             return (t, b);
         }
-        return (string.Join(",", options.Select(o => Format(store, o, ascii))), 0);
+        return (string.Join(",", options.Select(o => FormatPlain(store, o, ascii))), 0);
     }
 
     private static string FormatUpStar(Dyadic x, int n, int m, bool ascii)
@@ -312,6 +529,8 @@ public static class ValueExprWriter
         SwitchExpr s => ascii ? $"{{{s.X}|{-s.X}}}" : "±" + s.X,
         OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
         SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
+        PartExpr p => "#" + p.Name,
+        SharedExpr s => "(" + Write(s.Body, ascii) + " where " + string.Join("; ", s.Parts.OrderBy(kv => kv.Key).Select(kv => $"#{kv.Key} = {Write(kv.Value, ascii)}")) + ")",
         NegateExpr n => n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u && (u.X.IsZero || u.Ups == 0)) ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
         _ => throw new ArgumentException($"unknown expression {expr}"),
     };

@@ -20,8 +20,13 @@ public static class ValueVerb
         command.SetAction(parse => Failures.Guard(() =>
         {
             var text = PositionInput.Read(parse.GetValue(position)!);
-            var report = BigStack.Run(() => Analyse(parse.GetValue(ruleset)!, text, parse.GetValue(ascii), parse.GetValue(DbOption.Option)));
-            Console.Out.WriteLine(parse.GetValue(json) ? report.ToJson() : report.ToText());
+            // Deep values recurse in the store and in the writer alike: both run on the big stack.
+            var output = BigStack.Run(() =>
+            {
+                var report = Analyse(parse.GetValue(ruleset)!, text, parse.GetValue(ascii), parse.GetValue(DbOption.Option));
+                return parse.GetValue(json) ? report.ToJson() : report.ToText();
+            });
+            Console.Out.WriteLine(output);
             return Entry.Success;
         }));
         return command;
@@ -62,7 +67,7 @@ public sealed class ValueReport(GameStore store, Game value, IReadOnlyList<(stri
         {
             w.WriteLine($"components   {components.Count}");
             int i = 1;
-            foreach (var (text, v) in components) w.WriteLine($"  {i++,3}. {text}  =  {v}");
+            foreach (var (text, v) in components) w.WriteLine($"  {i++,3}. {Shorten(text)}  =  {v}");
         }
         return w.ToString().TrimEnd();
     }
@@ -85,6 +90,10 @@ public sealed class ValueReport(GameStore store, Game value, IReadOnlyList<(stri
         o["components"] = list;
         return o.ToJsonString(new JsonSerializerOptions { Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
     }
+
+    /// <summary>Component text for people: a long one is cut (the JSON keeps it whole).</summary>
+    private static string Shorten(string text) =>
+        text.Length <= 160 ? text : $"{text[..100]}… ({text.Length:N0} characters)";
 
     public static string Describe(Outcome o) => o switch
     {

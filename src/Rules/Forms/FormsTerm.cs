@@ -46,8 +46,20 @@ public sealed class FormsTerm
     private static IReadOnlyList<ValueExpr> OptionsOf(ValueExpr expression, Side side) => expression switch
     {
         OptionsExpr written => side == Side.Left ? written.Left : written.Right,
+        // A shared form plays as its body written out: the options are the body's, each
+        // carrying the named parts it still uses.
+        SharedExpr { Body: PartExpr named } shared => OptionsOf(SharedExpr.Around(shared.Parts[named.Name], shared.Parts), side),
+        SharedExpr { Body: OptionsExpr or NegateExpr } shared => OptionsOf(shared.Body, side, shared.Parts),
         NegateExpr negated => OptionsOf(negated.Inner, side.Other()).Select(Negated).ToArray(),
         _ => CanonicalOptions(expression, side),
+    };
+
+    /// <summary>Options of a body that refers to <paramref name="parts"/>.</summary>
+    private static IReadOnlyList<ValueExpr> OptionsOf(ValueExpr body, Side side, IReadOnlyDictionary<int, ValueExpr> parts) => body switch
+    {
+        OptionsExpr written => (side == Side.Left ? written.Left : written.Right).Select(o => SharedExpr.Around(o, parts)).ToArray(),
+        NegateExpr negated => OptionsOf(SharedExpr.Around(negated.Inner, parts), side.Other()).Select(Negated).ToArray(),
+        _ => CanonicalOptions(SharedExpr.Around(body, parts), side),
     };
 
     private static IReadOnlyList<ValueExpr> CanonicalOptions(ValueExpr expression, Side side)
