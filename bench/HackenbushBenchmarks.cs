@@ -6,11 +6,11 @@ using Bramble.Values;
 namespace Bramble.Bench;
 
 /// <summary>
-/// What <c>bramble value hackenbush</c> does with a position text before it prints: read the
+/// What <c>bramble value hackenbush</c> does with a position text, short of printing: read the
 /// text, split it into components, write each component's text, value each through one fresh
-/// memo and game store, and add the values. Writing the values out and the measures the verb
-/// prints afterwards (stops, mean, temperature, birthday, atomic weight) are the game store's
-/// work and are left out here (see bench/README.md). Runs on a big stack, as the verb does.
+/// memo and game store, add the values, write them out and work out the measures the verb
+/// prints (outcome, stops, mean, temperature, birthday, atomic weight). Runs on a big stack,
+/// as the verb does.
 /// </summary>
 internal static class HackenbushValuePath
 {
@@ -23,7 +23,10 @@ internal static class HackenbushValuePath
         var position = Rules.Parse(text);
         var parts = position.Components().Select(c => (c.Text, Value: Rules.Value(c, context))).ToList();
         var total = store.Sum(parts.Select(p => p.Value));
-        return total.Id + parts.Sum(p => p.Text.Length);
+        int written = store.Format(total).Length + parts.Sum(p => p.Text.Length + store.Format(p.Value).Length);
+        var measures = (store.OutcomeOf(total), store.LeftStop(total), store.RightStop(total), store.Mean(total),
+            store.Temperature(total), store.Birthday(total), store.AtomicWeight(total));
+        return written + measures.GetHashCode();
     });
 
     /// <summary>
