@@ -41,7 +41,7 @@ public sealed class LargeSearch(SumSearch sums, LocalValues values)
     public long PieceCap { get; set; } = 20_000;
 
     /// <summary>Pieces of at most this size are valued within <see cref="PieceCap"/>; bigger ones only when free.</summary>
-    public int SmallSize { get; set; } = 16;
+    public int SmallSize { get; set; } = 14;
 
     public SearchBudget Budget { get; set; } = SearchBudget.Unlimited();
 

@@ -75,14 +75,14 @@ public sealed class PerfectPlayer : IPlayer
     /// <summary>
     /// The components of the position with their exact values where they can be had: components
     /// up to <see cref="PerfectSettings.ExactSize"/> within the component cap and half the time
-    /// left (the search of large components needs the rest), bigger ones only when free.
+    /// left (the search of large components needs the rest), bigger ones within the probe cap.
     /// </summary>
     private IReadOnlyList<ValuedComponent> ValueRoot(IPosition position, SearchBudget b)
     {
         var result = new List<ValuedComponent>();
         foreach (var c in position.Components())
         {
-            long cap = c.Size <= Settings.ExactSize ? Settings.ComponentCap : 0;
+            long cap = c.Size <= Settings.ExactSize ? Settings.ComponentCap : Math.Min(Settings.ProbeCap, Settings.ComponentCap);
             long maxMs = b.RemainingMs == long.MaxValue ? long.MaxValue : b.RemainingMs / 2;
             result.Add(new ValuedComponent(c, _values.TryValue(c, cap, b, maxMs)));
         }
