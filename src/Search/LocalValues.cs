@@ -18,6 +18,9 @@ public sealed class LocalValues(ValueContext context)
     private readonly Dictionary<string, Game> _values = new(StringComparer.Ordinal);
 
     public ValueContext Context => context;
+
+    /// <summary>Attempts that ended at their cap (each one is remembered), for reports.</summary>
+    public long Failures { get; private set; }
     public GameStore Store => context.Store;
 
     /// <summary>
@@ -48,6 +51,7 @@ public sealed class LocalValues(ValueContext context)
         }
         catch (BudgetExceededException)
         {
+            Failures++;
             budget.Add(context.Nodes);
             budget.ThrowIfSpent();
             // A failure at the time limit says nothing about the node cap, so it is not remembered.

@@ -34,6 +34,9 @@ public sealed class PerfectPlayer : IPlayer
     }
 
     public string Name => "perfect";
+
+    /// <summary>Local-value attempts that ended at their cap so far (components left large).</summary>
+    public long LargeAttempts => _values.Failures;
     public PerfectSettings Settings { get; }
 
     /// <summary>The player's own value context (a database file may be loaded into it before play).</summary>
