@@ -12,8 +12,10 @@ namespace Bramble.Search;
 /// player picks one after which the opponent, moving first, loses.
 /// <para>
 /// In a lost position it plays the move that leaves the opponent the fewest winning replies
-/// (counted over the opponent's real moves), ties going to the move Thermostrat ranks highest.
-/// Past its budget it answers with Thermostrat's move and reports <c>Exact = false</c>.
+/// (counted over all the opponent's real moves), ties going to the move Thermostrat ranks highest.
+/// Past its budget it answers with Thermostrat's move, chosen within a share of the time kept back
+/// for it (estimated thermographs for components without an exact value), and reports
+/// <c>Exact = false</c> and, when it read an estimate, <c>Estimated = true</c> (docs/players.md).
 /// </para>
 /// </summary>
 public sealed class PerfectPlayer : IPlayer
@@ -117,7 +119,8 @@ public sealed class PerfectPlayer : IPlayer
             {
                 var after = c.After(_large, side);
                 int winning = 0;
-                foreach (var reply in Candidates(after, other))
+                // Every real reply counts, including those in components equal to one already looked at.
+                foreach (var reply in Candidates(after, other, distinct: false))
                     if (!_large.Wins(_large.Split(reply.After(_large, other)), side)) winning++;
                 int rank = IndexOf(ranking, c.Move);
                 if (winning < fewest || (winning == fewest && rank < bestRank))
@@ -211,11 +214,12 @@ public sealed class PerfectPlayer : IPlayer
     }
 
     /// <summary>
-    /// The real moves of a side, equal components once: those in small components first, hottest
-    /// component first; then those in large components, the move that leaves the mover the most
-    /// mobility in its component (own moves minus the opponent's) first.
+    /// The real moves of a side (equal components once unless <paramref name="distinct"/> is
+    /// false): those in small components first, hottest component first; then those in large
+    /// components, the move that leaves the mover the most mobility in its component (own moves
+    /// minus the opponent's) first.
     /// </summary>
-    private List<Candidate> Candidates(IReadOnlyList<ValuedComponent> components, Side side)
+    private List<Candidate> Candidates(IReadOnlyList<ValuedComponent> components, Side side, bool distinct = true)
     {
         var store = Context.Store;
         var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -223,7 +227,7 @@ public sealed class PerfectPlayer : IPlayer
         for (int i = 0; i < components.Count; i++)
         {
             var comp = components[i];
-            if (!seen.Add(comp.Position.NormalKey)) continue;
+            if (!seen.Add(comp.Position.NormalKey) && distinct) continue;
             var heat = comp.Value is { } v ? store.Temperature(v) : Dyadic.Zero;
             foreach (var m in comp.Position.Moves(side))
             {

@@ -140,6 +140,31 @@ public class DomineeringTests
     }
 
     [Fact]
+    public void InALostDomineeringPositionPerfectLeavesTheFewestWinningReplies()
+    {
+        // docs/players.md, the rule for lost positions; winning replies counted by plain search.
+        // Sums of several small regions often repeat a region, so replies in equal regions must all count.
+        var perfect = new PerfectPlayer();
+        var brute = new BruteForce();
+        int lost = 0;
+        foreach (var position in RandomBoards(seed: 606, count: 300))
+        {
+            foreach (var side in new[] { Side.Left, Side.Right })
+            {
+                if (position.Moves(side).Count == 0 || brute.Wins(position, side)) continue;
+                lost++;
+                var d = perfect.Choose(position, side, Plenty);
+                Assert.True(d.Exact);
+                Assert.False(d.Winning);
+                int fewest = position.Moves(side).Min(m => brute.WinningMoves(position.Play(side, m), side.Other()));
+                Assert.True(fewest == brute.WinningMoves(position.Play(side, d.Move!.Value), side.Other()),
+                    $"{position.Text}, {side.Word()} to move: {position.FormatMove(d.Move!.Value)} leaves more than {fewest} winning replies");
+            }
+        }
+        Assert.True(lost > 50, $"only {lost} lost positions were generated");
+    }
+
+    [Fact]
     public void PerfectWithEveryRegionLargeAgreesWithBruteForce()
     {
         // Sizes 0: no region gets an exact value unless its value is already memoised, so the
