@@ -167,13 +167,13 @@ public class DomineeringTests
     [Fact]
     public void PerfectWithEveryRegionLargeAgreesWithBruteForce()
     {
-        // Sizes 0: no region gets an exact value unless its value is already memoised, so the
-        // search of large components plays real moves nearly to the end.
+        // Sizes and probe 0: no region gets an exact value, so the search of large components
+        // plays real moves to the end of the game.
         var brute = new BruteForce();
         foreach (var position in RandomBoards(seed: 604, count: 150))
-            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 0, SmallSize = 0 }), position, brute);
+            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 0, SmallSize = 0, ProbeCap = 0 }), position, brute);
         // And with a small threshold: pieces of up to 4 cells valued, the rest searched.
         foreach (var position in RandomBoards(seed: 605, count: 150))
-            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 4, SmallSize = 4 }), position, brute);
+            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 4, SmallSize = 4, ProbeCap = 0 }), position, brute);
     }
 }
