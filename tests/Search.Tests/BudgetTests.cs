@@ -12,8 +12,8 @@ public class BudgetTests
 {
     private static readonly IRuleset Domineering = Rulesets.Get("domineering");
 
-    // Boards far beyond a millisecond's work for every player: perfect needs seconds for 6×6 and
-    // fails to finish 7×7 in minutes (bench/README.md), alphabeta is slower still.
+    // Boards far beyond a millisecond's work for every player: perfect needs about a second for
+    // 6×6 and minutes for 7×7 (bench/README.md), alphabeta far longer.
     public static TheoryData<string, string> PlayersAndBoards()
     {
         var data = new TheoryData<string, string>();
