@@ -27,6 +27,7 @@ public interface IPlayer
 /// <param name="Value">The position's value in notation, when known.</param>
 /// <param name="Winning">True/false when the player knows whether the side to move wins; null if unknown.</param>
 /// <param name="Line">The line considered, as move texts, best first.</param>
+/// <param name="Estimated">True when the choice read a thermograph estimated by bounded local search (a component over budget).</param>
 public sealed record Decision(
     Move? Move,
     long Nodes,
@@ -34,4 +35,5 @@ public sealed record Decision(
     bool Exact,
     string? Value = null,
     bool? Winning = null,
-    IReadOnlyList<string>? Line = null);
+    IReadOnlyList<string>? Line = null,
+    bool Estimated = false);

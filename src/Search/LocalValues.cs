@@ -18,21 +18,26 @@ public sealed class LocalValues(ValueContext context)
     private readonly Dictionary<string, Game> _values = new(StringComparer.Ordinal);
 
     public ValueContext Context => context;
+
+    /// <summary>Attempts that ended at their cap (each one is remembered), for reports.</summary>
+    public long Failures { get; private set; }
     public GameStore Store => context.Store;
 
     /// <summary>
-    /// The component's exact value if it can be found within <paramref name="nodeCap"/> local nodes;
-    /// null when it is larger than that. Nodes spent are added to <paramref name="budget"/>; when the
-    /// decision's own time runs out meanwhile, <see cref="BudgetExceededException"/> propagates.
+    /// The component's exact value if it can be found within <paramref name="nodeCap"/> local nodes
+    /// (and, when given, <paramref name="maxMs"/> milliseconds); null when it is larger than that. A
+    /// cap of 0 asks only for what costs no search: a memoised value or a ruleset's closed form.
+    /// Nodes spent are added to <paramref name="budget"/>; when the decision's own time runs out
+    /// meanwhile, <see cref="BudgetExceededException"/> propagates.
     /// </summary>
-    public Game? TryValue(IPosition component, long nodeCap, SearchBudget budget)
+    public Game? TryValue(IPosition component, long nodeCap, SearchBudget budget, long maxMs = long.MaxValue)
     {
         var ruleset = component.Ruleset;
         string key = ruleset.Name + ":" + component.NormalKey;
         if (_values.TryGetValue(key, out var memoised)) return memoised;
         if (_failedAt.TryGetValue(key, out long failed) && failed >= nodeCap) return null;
         budget.ThrowIfSpent();
-        long remaining = budget.RemainingMs;
+        long remaining = Math.Min(budget.RemainingMs, maxMs);
         context.Cancellation = budget.Halt;
         context.ResetCounters(remaining == long.MaxValue ? null : remaining, nodeCap);
         try
@@ -46,9 +51,11 @@ public sealed class LocalValues(ValueContext context)
         }
         catch (BudgetExceededException)
         {
+            Failures++;
             budget.Add(context.Nodes);
             budget.ThrowIfSpent();
-            _failedAt[key] = Math.Max(nodeCap, failed);
+            // A failure at the time limit says nothing about the node cap, so it is not remembered.
+            if (context.Nodes > nodeCap || context.ElapsedMs < remaining) _failedAt[key] = Math.Max(nodeCap, failed);
             return null;
         }
     }

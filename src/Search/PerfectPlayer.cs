@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using Bramble.Rules;
 using Bramble.Values;
 
@@ -11,8 +12,10 @@ namespace Bramble.Search;
 /// player picks one after which the opponent, moving first, loses.
 /// <para>
 /// In a lost position it plays the move that leaves the opponent the fewest winning replies
-/// (counted over the opponent's real moves), ties going to the move Thermostrat ranks highest.
-/// Past its budget it answers with Thermostrat's move and reports <c>Exact = false</c>.
+/// (counted over all the opponent's real moves), ties going to the move Thermostrat ranks highest.
+/// Past its budget it answers with Thermostrat's move, chosen within a share of the time kept back
+/// for it (estimated thermographs for components without an exact value), and reports
+/// <c>Exact = false</c> and, when it read an estimate, <c>Estimated = true</c> (docs/players.md).
 /// </para>
 /// </summary>
 public sealed class PerfectPlayer : IPlayer
@@ -28,11 +31,14 @@ public sealed class PerfectPlayer : IPlayer
         Context = context ?? new ValueContext();
         _values = new LocalValues(Context);
         _sums = new SumSearch(Context.Store);
-        _large = new LargeSearch(_sums, _values) { PieceCap = Settings.PieceCap };
-        _fallback = new TemperatureStrategy(new ThermalReader(_values));
+        _large = new LargeSearch(_sums, _values) { PieceCap = Settings.PieceCap, SmallSize = Settings.SmallSize };
+        _fallback = new TemperatureStrategy(new ThermalReader(_values) { ExactSize = Settings.SmallSize });
     }
 
     public string Name => "perfect";
+
+    /// <summary>Local-value attempts that ended at their cap so far (components left large).</summary>
+    public long LargeAttempts => _values.Failures;
     public PerfectSettings Settings { get; }
 
     /// <summary>The player's own value context (a database file may be loaded into it before play).</summary>
@@ -40,7 +46,11 @@ public sealed class PerfectPlayer : IPlayer
 
     public Decision Choose(IPosition position, Side side, TimeSpan budget, CancellationToken halt = default)
     {
-        var b = new SearchBudget(budget, halt, Settings.NodeCap);
+        var clock = Stopwatch.StartNew();
+        long totalMs = SearchBudget.Milliseconds(budget);
+        // Part of the time is kept back so that the fallback, when it is needed, still ends inside the budget.
+        long reserveMs = totalMs == long.MaxValue ? 0 : (long)Math.Min(Settings.FallbackMaxMs, totalMs * Settings.FallbackShare);
+        var b = new SearchBudget(totalMs == long.MaxValue ? budget : TimeSpan.FromMilliseconds(totalMs - reserveMs), halt, Settings.NodeCap);
         _sums.Budget = b;
         _large.Budget = b;
         if (position.Moves(side).Count == 0)
@@ -50,7 +60,7 @@ public sealed class PerfectPlayer : IPlayer
         List<Candidate> candidates;
         try
         {
-            components = _large.Value(position.Components(), Settings.ComponentCap);
+            components = ValueRoot(position, b);
             candidates = Candidates(components, side);
             foreach (var c in candidates)
             {
@@ -61,9 +71,27 @@ public sealed class PerfectPlayer : IPlayer
         }
         catch (BudgetExceededException)
         {
-            return Fallback(position, side, b);
+            long leftMs = totalMs == long.MaxValue ? long.MaxValue : Math.Max(0, totalMs - clock.ElapsedMilliseconds);
+            return Fallback(position, side, b, leftMs, halt, clock);
         }
         return Lost(position, side, b, components, candidates);
+    }
+
+    /// <summary>
+    /// The components of the position with their exact values where they can be had: components
+    /// up to <see cref="PerfectSettings.ExactSize"/> within the component cap and half the time
+    /// left (the search of large components needs the rest), bigger ones within the probe cap.
+    /// </summary>
+    private IReadOnlyList<ValuedComponent> ValueRoot(IPosition position, SearchBudget b)
+    {
+        var result = new List<ValuedComponent>();
+        foreach (var c in position.Components())
+        {
+            long cap = c.Size <= Settings.ExactSize ? Settings.ComponentCap : Math.Min(Settings.ProbeCap, Settings.ComponentCap);
+            long maxMs = b.RemainingMs == long.MaxValue ? long.MaxValue : b.RemainingMs / 2;
+            result.Add(new ValuedComponent(c, _values.TryValue(c, cap, b, maxMs)));
+        }
+        return result;
     }
 
     /// <summary>
@@ -91,7 +119,8 @@ public sealed class PerfectPlayer : IPlayer
             {
                 var after = c.After(_large, side);
                 int winning = 0;
-                foreach (var reply in Candidates(after, other))
+                // Every real reply counts, including those in components equal to one already looked at.
+                foreach (var reply in Candidates(after, other, distinct: false))
                     if (!_large.Wins(_large.Split(reply.After(_large, other)), side)) winning++;
                 int rank = IndexOf(ranking, c.Move);
                 if (winning < fewest || (winning == fewest && rank < bestRank))
@@ -118,23 +147,47 @@ public sealed class PerfectPlayer : IPlayer
     private Decision Exact(IPosition position, Move move, SearchBudget b, IReadOnlyList<ValuedComponent> components, bool winning) =>
         new(move, b.Nodes, b.ElapsedMs, Exact: true, Value: ValueText(components), Winning: winning, Line: [position.FormatMove(move)]);
 
-    private Decision Fallback(IPosition position, Side side, SearchBudget spent)
+    /// <summary>
+    /// Past the budget: Thermostrat's move, within the time kept back for it (and the halt signal),
+    /// reading thermographs from the values already found and estimating the rest by bounded local
+    /// search. If even that runs out, the move that leaves the mover the most mobility.
+    /// </summary>
+    private Decision Fallback(IPosition position, Side side, SearchBudget spent, long leftMs, CancellationToken halt, Stopwatch clock)
     {
-        // The fallback gets a small budget of its own: it reads thermographs from values already
-        // found, and estimates the rest shallowly.
-        var b = new SearchBudget(TimeSpan.FromMilliseconds(Math.Max(200, spent.ElapsedMs / 10)));
-        Move? move;
+        var b = new SearchBudget(leftMs == long.MaxValue ? Timeout.InfiniteTimeSpan : TimeSpan.FromMilliseconds(leftMs), halt);
+        Move? move = null;
+        bool estimated = true;
         try
         {
-            move = _fallback.Choose(position, side, TemperatureRule.Thermostrat, b).Move;
+            var choice = _fallback.Choose(position, side, TemperatureRule.Thermostrat, b);
+            move = choice.Move;
+            estimated = choice.Estimated;
         }
         catch (BudgetExceededException)
         {
-            move = null;
         }
-        move ??= position.Moves(side)[0];
-        return new Decision(move, spent.Nodes + b.Nodes, spent.ElapsedMs + b.ElapsedMs, Exact: false,
-            Line: [position.FormatMove(move.Value)]);
+        move ??= MostMobile(position, side);
+        return new Decision(move, spent.Nodes + b.Nodes, clock.ElapsedMilliseconds, Exact: false,
+            Line: [position.FormatMove(move.Value)], Estimated: estimated);
+    }
+
+    /// <summary>The move after which the mover has the most moves left over the opponent: the last resort, costing one play per move.</summary>
+    internal static Move MostMobile(IPosition position, Side side)
+    {
+        var moves = position.Moves(side);
+        Move best = moves[0];
+        int bestScore = int.MinValue;
+        foreach (var m in moves)
+        {
+            var after = position.Play(side, m);
+            int score = after.Moves(side).Count - after.Moves(side.Other()).Count;
+            if (score > bestScore)
+            {
+                bestScore = score;
+                best = m;
+            }
+        }
+        return best;
     }
 
     /// <summary>The value as notation: the canonical values of the components, summed where the sum is small.</summary>
@@ -160,21 +213,40 @@ public sealed class PerfectPlayer : IPlayer
         }
     }
 
-    /// <summary>The real moves of a side, hottest components first (large ones after the small), equal components once.</summary>
-    private List<Candidate> Candidates(IReadOnlyList<ValuedComponent> components, Side side)
+    /// <summary>
+    /// The real moves of a side (equal components once unless <paramref name="distinct"/> is
+    /// false): those in small components first, hottest component first; then those in large
+    /// components, the move that leaves the mover the most mobility in its component (own moves
+    /// minus the opponent's) first.
+    /// </summary>
+    private List<Candidate> Candidates(IReadOnlyList<ValuedComponent> components, Side side, bool distinct = true)
     {
         var store = Context.Store;
         var seen = new HashSet<string>(StringComparer.Ordinal);
-        var list = new List<(Candidate C, int Group, Dyadic Heat)>();
+        var list = new List<(Candidate C, int Group, Dyadic Heat, int Mobility, int Order)>();
         for (int i = 0; i < components.Count; i++)
         {
             var comp = components[i];
-            if (!seen.Add(comp.Position.NormalKey)) continue;
+            if (!seen.Add(comp.Position.NormalKey) && distinct) continue;
             var heat = comp.Value is { } v ? store.Temperature(v) : Dyadic.Zero;
             foreach (var m in comp.Position.Moves(side))
-                list.Add((new Candidate(components, i, m), comp.Value is null ? 1 : 0, heat));
+            {
+                int mobility = 0;
+                if (comp.Value is null)
+                {
+                    var after = comp.Position.Play(side, m);
+                    mobility = after.Moves(side).Count - after.Moves(side.Other()).Count;
+                }
+                list.Add((new Candidate(components, i, m), comp.Value is null ? 1 : 0, heat, mobility, list.Count));
+            }
         }
-        list.Sort((p, q) => p.Group != q.Group ? p.Group.CompareTo(q.Group) : q.Heat.CompareTo(p.Heat));
+        list.Sort((p, q) =>
+        {
+            if (p.Group != q.Group) return p.Group.CompareTo(q.Group);
+            int c = q.Heat.CompareTo(p.Heat);
+            if (c == 0) c = q.Mobility.CompareTo(p.Mobility);
+            return c != 0 ? c : p.Order.CompareTo(q.Order);
+        });
         return list.ConvertAll(x => x.C);
     }
 
@@ -187,7 +259,7 @@ public sealed class PerfectPlayer : IPlayer
             var pieces = Components[Index].Position.Play(side, Move).Components();
             var result = new List<ValuedComponent>(Components.Count + pieces.Count);
             for (int i = 0; i < Components.Count; i++) if (i != Index) result.Add(Components[i]);
-            result.AddRange(large.Value(pieces, large.PieceCap));
+            result.AddRange(large.ValuePieces(pieces));
             return result;
         }
     }

@@ -6,9 +6,31 @@ public sealed record PerfectSettings
     /// <summary>Node cap for the exact value of each component of the position to decide.</summary>
     public long ComponentCap { get; init; } = 400_000;
 
+    /// <summary>
+    /// Components of the position to decide up to this size (<see cref="Bramble.Rules.IPosition.Size"/>)
+    /// are valued within <see cref="ComponentCap"/>; bigger ones within <see cref="ProbeCap"/>
+    /// (enough for a value that is cheap whatever the size), else they go to the search of large components.
+    /// </summary>
+    public int ExactSize { get; init; } = 20;
+
+    /// <summary>Node cap of the exact attempt for a component over <see cref="ExactSize"/>.</summary>
+    public long ProbeCap { get; init; } = 256;
+
     /// <summary>Node cap for the exact value of a piece made by a move inside the search of large components.</summary>
     public long PieceCap { get; init; } = 20_000;
 
+    /// <summary>Pieces up to this size made inside the search are valued within <see cref="PieceCap"/>; bigger ones stay large.</summary>
+    public int SmallSize { get; init; } = 14;
+
     /// <summary>Total node cap of one decision (local values and searches together).</summary>
     public long NodeCap { get; init; } = long.MaxValue;
+
+    /// <summary>
+    /// The share of a decision's time kept back for the Thermostrat fallback (at most
+    /// <see cref="FallbackMaxMs"/>): the exact search stops early enough for the fallback to finish
+    /// inside the budget.
+    /// </summary>
+    public double FallbackShare { get; init; } = 0.1;
+
+    public long FallbackMaxMs { get; init; } = 2_000;
 }

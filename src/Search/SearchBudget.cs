@@ -17,12 +17,14 @@ public sealed class SearchBudget
 
     public SearchBudget(TimeSpan time, CancellationToken halt = default, long nodeCap = long.MaxValue)
     {
-        _deadlineMs = time == Timeout.InfiniteTimeSpan || time.TotalMilliseconds >= long.MaxValue / 2
-            ? long.MaxValue
-            : (long)Math.Max(0, time.TotalMilliseconds);
+        _deadlineMs = Milliseconds(time);
         _nodeCap = nodeCap;
         _halt = halt;
     }
+
+    /// <summary>A time budget in whole milliseconds; <see cref="long.MaxValue"/> for an infinite one.</summary>
+    public static long Milliseconds(TimeSpan time) =>
+        time == Timeout.InfiniteTimeSpan || time.TotalMilliseconds >= long.MaxValue / 2 ? long.MaxValue : (long)Math.Max(0, time.TotalMilliseconds);
 
     /// <summary>No limit but the halt token: for tests and exhaustive analysis.</summary>
     public static SearchBudget Unlimited(CancellationToken halt = default) => new(Timeout.InfiniteTimeSpan, halt);

@@ -50,14 +50,14 @@ public sealed class TemperaturePlayer : IPlayer
         }
         catch (BudgetExceededException)
         {
-            // Out of time before every component was read: any legal move beats none.
-            var moves = position.Moves(side);
-            return new Decision(moves.Count > 0 ? moves[0] : null, b.Nodes, b.ElapsedMs, Exact: false);
+            // Out of time (or halted) before every component was read: the cheap last resort beats no move.
+            Move? resort = position.Moves(side).Count > 0 ? PerfectPlayer.MostMobile(position, side) : null;
+            return new Decision(resort, b.Nodes, b.ElapsedMs, Exact: false, Estimated: true);
         }
         LastEstimates = choice.Readings.Where(r => r.Estimated).Select(r => r.Position.Text).ToList();
         if (Rule == TemperatureRule.Sentestrat && choice.Move is { } played) Remember(position.Play(side, played), side, b);
         var line = choice.Move is { } m ? new[] { position.FormatMove(m) } : [];
-        return new Decision(choice.Move, b.Nodes, b.ElapsedMs, Exact: false, Line: line);
+        return new Decision(choice.Move, b.Nodes, b.ElapsedMs, Exact: false, Line: line, Estimated: choice.Estimated);
     }
 
     private void Remember(IPosition after, Side side, SearchBudget budget)

@@ -15,6 +15,16 @@ public sealed class ThermalReader(LocalValues values)
     /// <summary>Node cap for an exact value before the reader settles for an estimate.</summary>
     public long ExactCap { get; set; } = 20_000;
 
+    /// <summary>
+    /// Components (and pieces inside an estimate) larger than this (<see cref="IPosition.Size"/>)
+    /// get only <see cref="ProbeCap"/> nodes for an exact value (enough for a value that is cheap
+    /// whatever the size, such as a long chain of numbers); the rest are estimated at once.
+    /// </summary>
+    public int ExactSize { get; set; } = 20;
+
+    /// <summary>Node cap of the exact attempt for a component over <see cref="ExactSize"/> (pieces inside an estimate get none).</summary>
+    public long ProbeCap { get; set; } = 256;
+
     /// <summary>Node cap for the exact value of a piece inside an estimate.</summary>
     public long PieceCap { get; set; } = 2_000;
 
@@ -25,7 +35,10 @@ public sealed class ThermalReader(LocalValues values)
 
     public HeatReading Read(IPosition component, SearchBudget budget)
     {
-        if (values.TryValue(component, ExactCap, budget) is { } exact)
+        // An exact attempt may take half the time left, so that an estimate still fits after a failure.
+        long cap = component.Size <= ExactSize ? ExactCap : Math.Min(ProbeCap, ExactCap);
+        long maxMs = budget.RemainingMs == long.MaxValue ? long.MaxValue : budget.RemainingMs / 2;
+        if (values.TryValue(component, cap, budget, maxMs) is { } exact)
             return new HeatReading(component, exact, Store.Thermograph(exact), Estimated: false);
         var estimate = Estimate(component, budget);
         return new HeatReading(component, estimate, Store.Thermograph(estimate), Estimated: true);
@@ -66,7 +79,11 @@ public sealed class ThermalReader(LocalValues values)
     {
         var total = Store.Zero;
         foreach (var piece in after.Components())
-            total = Store.Add(total, values.TryValue(piece, PieceCap, budget) ?? Tree(piece, depth, budget));
+        {
+            // Inside an estimate a big piece gets no probe: there are many of them, and most are not cheap.
+            long cap = piece.Size <= ExactSize ? PieceCap : 0;
+            total = Store.Add(total, values.TryValue(piece, cap, budget) ?? Tree(piece, depth, budget));
+        }
         return total;
     }
 }

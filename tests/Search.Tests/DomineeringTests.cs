@@ -39,6 +39,14 @@ public class DomineeringTests
         // 6×3 won by Vertical (m×3 and 2k×3); 3×6 won by Horizontal (3×n and 3×2k, k > 1): Uiterwijk 2014.
         { "6x3", Outcome.L, "Uiterwijk 2014" },
         { "3x6", Outcome.R, "Uiterwijk 2014" },
+        // 5×6 won by Horizontal (m×2k, m = 5); 6×5 won by Vertical (2k×n, n = 5): Uiterwijk 2014.
+        // With Right first, 5×6 is Vertical first on 6×5 and so on (CHECKS.md §8).
+        { "5x6", Outcome.R, "Uiterwijk 2014" },
+        { "6x5", Outcome.L, "Uiterwijk 2014" },
+        // 5×5 is a second-player win and 6×6 a first-player win: from memory, the m×n table of
+        // Breuker, Uiterwijk, van den Herik, TCS 230 (2000) (CHECKS.md §8 cites the table).
+        { "5x5", Outcome.P, "from memory: Breuker et al. 2000" },
+        { "6x6", Outcome.N, "from memory: Breuker et al. 2000" },
         // A vertical strip of n cells is ⌊n/2⌋ > 0 and a horizontal one −⌊n/2⌋: Wikipedia, "Domineering".
         { "7x1", Outcome.L, "Wikipedia" },
         { "1x6", Outcome.R, "Wikipedia" },
@@ -129,5 +137,43 @@ public class DomineeringTests
         var brute = new BruteForce();
         foreach (var position in RandomBoards(seed: 603, count: 150))
             Check(new PerfectPlayer(new PerfectSettings { ComponentCap = 4, PieceCap = 3 }), position, brute);
+    }
+
+    [Fact]
+    public void InALostDomineeringPositionPerfectLeavesTheFewestWinningReplies()
+    {
+        // docs/players.md, the rule for lost positions; winning replies counted by plain search.
+        // Sums of several small regions often repeat a region, so replies in equal regions must all count.
+        var perfect = new PerfectPlayer();
+        var brute = new BruteForce();
+        int lost = 0;
+        foreach (var position in RandomBoards(seed: 606, count: 300))
+        {
+            foreach (var side in new[] { Side.Left, Side.Right })
+            {
+                if (position.Moves(side).Count == 0 || brute.Wins(position, side)) continue;
+                lost++;
+                var d = perfect.Choose(position, side, Plenty);
+                Assert.True(d.Exact);
+                Assert.False(d.Winning);
+                int fewest = position.Moves(side).Min(m => brute.WinningMoves(position.Play(side, m), side.Other()));
+                Assert.True(fewest == brute.WinningMoves(position.Play(side, d.Move!.Value), side.Other()),
+                    $"{position.Text}, {side.Word()} to move: {position.FormatMove(d.Move!.Value)} leaves more than {fewest} winning replies");
+            }
+        }
+        Assert.True(lost > 50, $"only {lost} lost positions were generated");
+    }
+
+    [Fact]
+    public void PerfectWithEveryRegionLargeAgreesWithBruteForce()
+    {
+        // Sizes and probe 0: no region gets an exact value, so the search of large components
+        // plays real moves to the end of the game.
+        var brute = new BruteForce();
+        foreach (var position in RandomBoards(seed: 604, count: 150))
+            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 0, SmallSize = 0, ProbeCap = 0 }), position, brute);
+        // And with a small threshold: pieces of up to 4 cells valued, the rest searched.
+        foreach (var position in RandomBoards(seed: 605, count: 150))
+            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 4, SmallSize = 4, ProbeCap = 0 }), position, brute);
     }
 }

@@ -91,4 +91,14 @@ public class RulesetSumsTests
         foreach (var p in HackenbushSums(seed: 905, count: 150).Concat(FormsSums(seed: 906, count: 150)))
             Check(new PerfectPlayer(new PerfectSettings { ComponentCap = 2, PieceCap = 2 }), p, brute);
     }
+
+    [Fact]
+    public void PerfectWithSizeThresholdsZeroAgreesWithBruteForceOnHackenbushAndForms()
+    {
+        // Sizes 0: a component gets an exact value only within the probe at the root and, inside
+        // the search, only when its value costs no search (closed forms such as green trees).
+        var brute = new BruteForce();
+        foreach (var p in HackenbushSums(seed: 907, count: 150).Concat(FormsSums(seed: 908, count: 150)))
+            Check(new PerfectPlayer(new PerfectSettings { ExactSize = 0, SmallSize = 0, ProbeCap = 0 }), p, brute);
+    }
 }
