@@ -42,7 +42,7 @@ public sealed class ValueContext
     {
         Nodes++;
         if (Nodes > _nodeCap) throw new BudgetExceededException("node cap reached");
-        if ((Nodes & 1023) == 0 && (_clock.ElapsedMilliseconds > _deadlineMs || Cancellation.IsCancellationRequested))
+        if ((Nodes & 63) == 0 && (_clock.ElapsedMilliseconds > _deadlineMs || Cancellation.IsCancellationRequested))
             throw new BudgetExceededException("time budget spent");
     }
 
