@@ -276,7 +276,9 @@ public class MatchEndToEndTests
         {
             ruleset = "heaps",
             positions = new { file = "suites/garden.txt" },
-            players = new[] { Player("a", "--pid-dir", pids), Player("b", "--seed", "2", "--pid-dir", pids), Player("c", "--seed", "3", "--pid-dir", pids) },
+            // Player a thinks 30 ms a move, so the match outlasts the four kills however fast the
+            // machine is (without it the 48 games could finish before the harness was killed).
+            players = new[] { Player("a", "--mode", "slow", "--delay-ms", "30", "--pid-dir", pids), Player("b", "--seed", "2", "--pid-dir", pids), Player("c", "--seed", "3", "--pid-dir", pids) },
             seats = "all-four",
             parallel = 2,
             journal = "j.jsonl",
