@@ -608,7 +608,7 @@ public sealed partial class GameStore
     {
         public static readonly PairHash Instance = new();
         public bool Equals(long x, long y) => x == y;
-        public int GetHashCode(long key) => (int)(((ulong)key * 0x9E3779B97F4A7C15UL) >> 32);
+        public int GetHashCode(long key) => PairTable.Hash(key);
     }
 
     private sealed class ListPolicy : PooledObjectPolicy<List<int>>

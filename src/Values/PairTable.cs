@@ -43,7 +43,8 @@ internal sealed class PairTable
         _recent[Hash(pair) >> (31 - RecentBits)] = value;
     }
 
-    private static int Hash(long pair) => (int)(((ulong)pair * 0x9E3779B97F4A7C15UL) >> 33);
+    /// <summary>A well-mixed 31-bit hash of a packed pair (Fibonacci hashing), also used by the store's pair-keyed dictionaries.</summary>
+    internal static int Hash(long pair) => (int)(((ulong)pair * 0x9E3779B97F4A7C15UL) >> 33);
 
     /// <summary>Writes the slot; false when the pair was already there (its answer is replaced).</summary>
     private static bool Insert(ulong[] slots, ulong value)

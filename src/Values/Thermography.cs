@@ -21,12 +21,12 @@ public sealed partial class GameStore
             var wall = Trajectory.Constant(x);
             result = new Thermograph(wall, wall, NumberTemperature(x), x);
         }
-        else if (TryGetUpStar(g, out var ix, out _, out _) && _tag[g.Id] is not null)
+        else if (_tag[g.Id] is { } tag)
         {
             // x plus an infinitesimal: temperature 0, both walls the mast at x (no need to walk
             // the options, which for *m are m nimbers).
-            var wall = Trajectory.Constant(ix);
-            result = new Thermograph(wall, wall, Dyadic.Zero, ix);
+            var wall = Trajectory.Constant(tag.X);
+            result = new Thermograph(wall, wall, Dyadic.Zero, tag.X);
         }
         else
         {

@@ -408,11 +408,7 @@ public static class ValueNotation
         return FormatShared(store, g, ascii, lengths);
     }
 
-    private static string FormatPlain(GameStore store, Game g, bool ascii)
-    {
-        var (inner, bars) = FormatPart(store, g, ascii);
-        return bars > 0 ? "{" + inner + "}" : inner;
-    }
+    private static string FormatPlain(GameStore store, Game g, bool ascii) => new Writer(store, ascii, _ => null).Whole(g);
 
     private static bool IsAtom(GameStore store, Game g) =>
         store.IsNumber(g) || store.TryGetUpStar(g, out _, out _, out _) || store.IsSwitch(g);
@@ -437,9 +433,9 @@ public static class ValueNotation
     {
         var names = new Dictionary<Game, int>();
         var order = new List<Game>();
-        bool Named(Game g) => !IsAtom(store, g) && lengths[g] > NameAbove;
-        string Name(Game g)
+        string? NameOf(Game g)
         {
+            if (IsAtom(store, g) || lengths[g] <= NameAbove) return null;
             if (!names.TryGetValue(g, out int k))
             {
                 k = names.Count + 1;
@@ -448,60 +444,50 @@ public static class ValueNotation
             }
             return "#" + k;
         }
-        (string Text, int Bars) Part(Game g)
+        var writer = new Writer(store, ascii, NameOf);
+        var sb = new StringBuilder(writer.Whole(root));
+        // Definitions in order of first use; writing one may name further parts.
+        for (int i = 0; i < order.Count; i++)
         {
-            if (IsAtom(store, g)) return FormatPart(store, g, ascii);
+            sb.Append(i == 0 ? " where " : "; ");
+            sb.Append('#').Append(i + 1).Append(" = ").Append(writer.Whole(order[i]));
+        }
+        return sb.ToString();
+    }
+
+    /// <summary>
+    /// Writes games with the multi-bar shorthand; an option that <c>nameOf</c> names is written
+    /// as that name (the plain form names nothing).
+    /// </summary>
+    private sealed class Writer(GameStore store, bool ascii, Func<Game, string?> nameOf)
+    {
+        public string Whole(Game g)
+        {
+            var (text, bars) = Part(g);
+            return bars > 0 ? "{" + text + "}" : text;
+        }
+
+        /// <summary>Text of g, and for brace forms the text inside the braces with its number of bars (0 for atoms).</summary>
+        private (string Text, int Bars) Part(Game g)
+        {
+            if (store.TryGetNumber(g, out var x)) return (x.ToString(), 0);
+            if (store.TryGetUpStar(g, out var ux, out int n, out int m)) return (FormatUpStar(ux, n, m, ascii), 0);
             var left = store.LeftOptions(g);
             var right = store.RightOptions(g);
+            if (!ascii && left.Count == 1 && right.Count == 1 && store.TryGetNumber(left[0], out var a)
+                && store.TryGetNumber(right[0], out var b) && a == -b && a.Sign > 0)
+                return ("±" + a, 0);
             var (lt, lb) = Side(left);
             var (rt, rb) = Side(right);
             int bars = Math.Max(lb, rb) + 1;
             return (lt + new string('|', bars) + rt, bars);
         }
-        (string Text, int Bars) Side(IReadOnlyList<Game> options)
-        {
-            if (options.Count == 1 && !Named(options[0])) return Part(options[0]);
-            return (string.Join(",", options.Select(o => Named(o) ? Name(o) : Whole(o))), 0);
-        }
-        string Whole(Game g)
-        {
-            var (t, bars) = Part(g);
-            return bars > 0 ? "{" + t + "}" : t;
-        }
-        var sb = new StringBuilder(Whole(root));
-        // Definitions in order of first use; writing one may name further parts.
-        for (int i = 0; i < order.Count; i++)
-        {
-            sb.Append(i == 0 ? " where " : "; ");
-            sb.Append('#').Append(i + 1).Append(" = ").Append(Whole(order[i]));
-        }
-        return sb.ToString();
-    }
 
-    /// <summary>Text of g, and for brace forms the text inside the braces with its number of bars (0 for atoms).</summary>
-    private static (string Text, int Bars) FormatPart(GameStore store, Game g, bool ascii)
-    {
-        if (store.TryGetNumber(g, out var x)) return (x.ToString(), 0);
-        if (store.TryGetUpStar(g, out var ux, out int n, out int m)) return (FormatUpStar(ux, n, m, ascii), 0);
-        var left = store.LeftOptions(g);
-        var right = store.RightOptions(g);
-        if (!ascii && left.Count == 1 && right.Count == 1 && store.TryGetNumber(left[0], out var a)
-            && store.TryGetNumber(right[0], out var b) && a == -b && a.Sign > 0)
-            return ("±" + a, 0);
-        var (lt, lb) = FormatSide(store, left, ascii);
-        var (rt, rb) = FormatSide(store, right, ascii);
-        int bars = Math.Max(lb, rb) + 1;
-        return (lt + new string('|', bars) + rt, bars);
-    }
-
-    private static (string Text, int Bars) FormatSide(GameStore store, IReadOnlyList<Game> options, bool ascii)
-    {
-        if (options.Count == 1)
+        private (string Text, int Bars) Side(IReadOnlyList<Game> options)
         {
-            var (t, b) = FormatPart(store, options[0], ascii);
-            return (t, b);
+            if (options.Count == 1 && nameOf(options[0]) is null) return Part(options[0]);
+            return (string.Join(",", options.Select(o => nameOf(o) ?? Whole(o))), 0);
         }
-        return (string.Join(",", options.Select(o => FormatPlain(store, o, ascii))), 0);
     }
 
     private static string FormatUpStar(Dyadic x, int n, int m, bool ascii)

@@ -79,17 +79,9 @@ public class PerfectOnTreesTests
         foreach (var position in RandomSums(seed: 504, count: 400, maxParts: 3, maxDepth: 3))
         {
             var brute = new BruteForce();
+            // docs/players.md: the rule for lost positions (derived from the definitions of the rule itself).
             foreach (var side in new[] { Side.Left, Side.Right })
-            {
-                if (position.Moves(side).Count == 0 || brute.Wins(position, side)) continue;
-                lost++;
-                var d = perfect.Choose(position, side, Plenty);
-                Assert.True(d.Exact);
-                Assert.False(d.Winning);
-                int fewest = position.Moves(side).Min(m => brute.WinningMoves(position.Play(side, m), side.Other()));
-                // docs/players.md: the rule for lost positions (derived from the definitions of the rule itself).
-                Assert.Equal(fewest, brute.WinningMoves(position.Play(side, d.Move!.Value), side.Other()));
-            }
+                if (LostRule.Check(perfect, brute, position, side, Plenty)) lost++;
         }
         Assert.True(lost > 50, $"only {lost} lost positions were generated");
     }

@@ -48,8 +48,7 @@ public sealed class FormsTerm
         OptionsExpr written => side == Side.Left ? written.Left : written.Right,
         // A shared form plays as its body written out: the options are the body's, each
         // carrying the named parts it still uses.
-        SharedExpr { Body: PartExpr named } shared => OptionsOf(SharedExpr.Around(shared.Parts[named.Name], shared.Parts), side),
-        SharedExpr { Body: OptionsExpr or NegateExpr } shared => OptionsOf(shared.Body, side, shared.Parts),
+        SharedExpr shared => OptionsOf(shared.Body, side, shared.Parts),
         NegateExpr negated => OptionsOf(negated.Inner, side.Other()).Select(Negated).ToArray(),
         _ => CanonicalOptions(expression, side),
     };
@@ -57,6 +56,7 @@ public sealed class FormsTerm
     /// <summary>Options of a body that refers to <paramref name="parts"/>.</summary>
     private static IReadOnlyList<ValueExpr> OptionsOf(ValueExpr body, Side side, IReadOnlyDictionary<int, ValueExpr> parts) => body switch
     {
+        PartExpr named => OptionsOf(SharedExpr.Around(parts[named.Name], parts), side),
         OptionsExpr written => (side == Side.Left ? written.Left : written.Right).Select(o => SharedExpr.Around(o, parts)).ToArray(),
         NegateExpr negated => OptionsOf(SharedExpr.Around(negated.Inner, parts), side.Other()).Select(Negated).ToArray(),
         _ => CanonicalOptions(SharedExpr.Around(body, parts), side),

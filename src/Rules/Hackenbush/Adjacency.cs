@@ -40,4 +40,27 @@ internal sealed class Adjacency
     }
 
     public static int Other(int[] from, int[] to, int e, int v) => from[e] == v ? to[e] : from[e];
+
+    /// <summary>Which vertices have a path to the ground (vertex 0), leaving out edge <paramref name="skip"/> (or none: -1).</summary>
+    public bool[] ReachFromGround(int[] from, int[] to, int skip = -1)
+    {
+        int n = Start.Length - 1;
+        var seen = new bool[n];
+        var queue = new int[n];
+        int head = 0, tail = 0;
+        seen[0] = true;
+        queue[tail++] = 0;
+        while (head < tail)
+        {
+            int v = queue[head++];
+            for (int i = Start[v]; i < Start[v + 1]; i++)
+            {
+                int e = Edge[i];
+                if (e == skip) continue;
+                int w = Other(from, to, e, v);
+                if (!seen[w]) { seen[w] = true; queue[tail++] = w; }
+            }
+        }
+        return seen;
+    }
 }

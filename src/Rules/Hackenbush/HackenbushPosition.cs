@@ -110,23 +110,7 @@ public sealed class HackenbushPosition : IPosition
 
     private HackenbushPosition Without(int cut)
     {
-        var adj = Adjacency;
-        var seen = new bool[_nodeCount];
-        var queue = new int[_nodeCount];
-        int head = 0, tail = 0;
-        seen[0] = true;
-        queue[tail++] = 0;
-        while (head < tail)
-        {
-            int v = queue[head++];
-            for (int i = adj.Start[v]; i < adj.Start[v + 1]; i++)
-            {
-                int e = adj.Edge[i];
-                if (e == cut) continue;
-                int w = Adjacency.Other(_from, _to, e, v);
-                if (!seen[w]) { seen[w] = true; queue[tail++] = w; }
-            }
-        }
+        var seen = Adjacency.ReachFromGround(_from, _to, skip: cut);
         // Renumber the surviving nodes in their old order, so the result does not depend on the search order.
         var renumber = new int[_nodeCount];
         int nodes = 0;

@@ -191,21 +191,7 @@ internal sealed class NotationReader
         int m = _colours.Count;
         var from = _from.ToArray();
         var to = _to.ToArray();
-        var adj = Adjacency.Build(_nodes, from, to);
-        var seen = new bool[_nodes];
-        var queue = new int[_nodes];
-        int head = 0, tail = 0;
-        seen[0] = true;
-        queue[tail++] = 0;
-        while (head < tail)
-        {
-            int v = queue[head++];
-            for (int i = adj.Start[v]; i < adj.Start[v + 1]; i++)
-            {
-                int w = Adjacency.Other(from, to, adj.Edge[i], v);
-                if (!seen[w]) { seen[w] = true; queue[tail++] = w; }
-            }
-        }
+        var seen = Adjacency.Build(_nodes, from, to).ReachFromGround(from, to);
         for (int e = 0; e < m; e++)
         {
             if (!seen[from[e]])
