@@ -447,35 +447,48 @@ public sealed partial class GameStore
 
     private bool Leq(int a, int b)
     {
+        if (TrySettle(a, b, out bool settled)) return settled;
+        // A refutation that needs no search is looked for first, over all options, before any
+        // option is searched: the first search would otherwise often go deep for nothing.
+        bool result = true;
+        var al = _kind[a] != NumberKind ? LeftIds(a) : [];
+        var br = _kind[b] != NumberKind ? RightIds(b) : [];
+        foreach (int x in al) if (TrySettle(b, x, out bool le) && le) { result = false; break; }
+        if (result) foreach (int y in br) if (TrySettle(y, a, out bool le) && le) { result = false; break; }
+        if (result)
+        {
+            // No a^L ≥ b (a number a has no left option that matters: x ≤ G iff no G^R ≤ x).
+            foreach (int x in al) if (Leq(b, x)) { result = false; break; }
+        }
+        if (result)
+        {
+            foreach (int y in br) if (Leq(y, a)) { result = false; break; }
+        }
+        _leq.Set(Pack(a, b), result);
+        return result;
+    }
+
+    /// <summary>a ≤ b when it is known without search: equal ids, closed forms, stops or the memo.</summary>
+    private bool TrySettle(int a, int b, out bool answer)
+    {
+        answer = true;
         if (a == b) return true;
         byte ka = _kind[a], kb = _kind[b];
-        if (ka == NumberKind && kb == NumberKind) return _number[a]!.Value <= _number[b]!.Value;
+        if (ka == NumberKind && kb == NumberKind) { answer = _number[a]!.Value <= _number[b]!.Value; return true; }
         if (ka != General && kb != General)
         {
             var s = _tag[a]!.Value;
             var t = _tag[b]!.Value;
-            return new UpStarTag(t.X - s.X, t.N - s.N, t.M ^ s.M).IsNonNegative;
+            answer = new UpStarTag(t.X - s.X, t.N - s.N, t.M ^ s.M).IsNonNegative;
+            return true;
         }
         // Stops settle most comparisons without search: a ≤ b forces L(a) ≤ L(b) and
         // R(a) ≤ R(b), and L(a) < R(b) forces a < b (L(a - b) ≤ L(a) - R(b) < 0).
         EnsureStops(a);
         EnsureStops(b);
-        if (_ls[a] > _ls[b] || _rs[a] > _rs[b]) return false;
+        if (_ls[a] > _ls[b] || _rs[a] > _rs[b]) { answer = false; return true; }
         if (_ls[a] < _rs[b]) return true;
-        long key = Pack(a, b);
-        if (_leq.TryGet(key, out bool known)) return known;
-        bool result = true;
-        if (ka != NumberKind)
-        {
-            // No a^L ≥ b (a number a has no left option that matters: x ≤ G iff no G^R ≤ x).
-            foreach (int al in LeftIds(a)) if (Leq(b, al)) { result = false; break; }
-        }
-        if (result && kb != NumberKind)
-        {
-            foreach (int br in RightIds(b)) if (Leq(br, a)) { result = false; break; }
-        }
-        _leq.Set(key, result);
-        return result;
+        return _leq.TryGet(Pack(a, b), out answer);
     }
 
     public bool Less(Game a, Game b) => a != b && Leq(a, b);
