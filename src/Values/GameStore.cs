@@ -449,23 +449,36 @@ public sealed partial class GameStore
     {
         if (TrySettle(a, b, out bool settled)) return settled;
         // A refutation that needs no search is looked for first, over all options, before any
-        // option is searched: the first search would otherwise often go deep for nothing.
-        bool result = true;
+        // option is searched: the first search would otherwise often go deep for nothing. The
+        // options settled there (the first 64 of a side) are not asked again.
         var al = _kind[a] != NumberKind ? LeftIds(a) : [];
         var br = _kind[b] != NumberKind ? RightIds(b) : [];
-        foreach (int x in al) if (TrySettle(b, x, out bool le) && le) { result = false; break; }
-        if (result) foreach (int y in br) if (TrySettle(y, a, out bool le) && le) { result = false; break; }
-        if (result)
-        {
-            // No a^L ≥ b (a number a has no left option that matters: x ≤ G iff no G^R ≤ x).
-            foreach (int x in al) if (Leq(b, x)) { result = false; break; }
-        }
-        if (result)
-        {
-            foreach (int y in br) if (Leq(y, a)) { result = false; break; }
-        }
+        ulong settledLeft = 0, settledRight = 0;
+        bool result = !SettledRefutation(al, b, leftOptions: true, ref settledLeft)
+            && !SettledRefutation(br, a, leftOptions: false, ref settledRight);
+        // No a^L ≥ b (a number a has no left option that matters: x ≤ G iff no G^R ≤ x), no b^R ≤ a.
+        for (int i = 0; result && i < al.Length; i++)
+            if ((i >= 64 || (settledLeft >> i & 1) == 0) && Leq(b, al[i])) result = false;
+        for (int i = 0; result && i < br.Length; i++)
+            if ((i >= 64 || (settledRight >> i & 1) == 0) && Leq(br[i], a)) result = false;
         _leq.Set(Pack(a, b), result);
         return result;
+    }
+
+    /// <summary>
+    /// Whether one of the options refutes without search (a^L ≥ b for left options of a, b^R ≤ a
+    /// for right options of b); marks in <paramref name="settled"/> those found not to refute.
+    /// </summary>
+    private bool SettledRefutation(int[] options, int other, bool leftOptions, ref ulong settled)
+    {
+        for (int i = 0; i < options.Length; i++)
+        {
+            bool known = leftOptions ? TrySettle(other, options[i], out bool refutes) : TrySettle(options[i], other, out refutes);
+            if (!known) continue;
+            if (refutes) return true;
+            if (i < 64) settled |= 1UL << i;
+        }
+        return false;
     }
 
     /// <summary>a ≤ b when it is known without search: equal ids, closed forms, stops or the memo.</summary>
