@@ -58,13 +58,13 @@ public sealed class ApiErrorTests(BoardServer board) : IClassFixture<BoardServer
     [Fact]
     public async Task UnknownOpponentLevelAndSideAreRefused()
     {
-        var (s1, b1) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "BR", first = "left", move = "e1", opponent = "oracle", computer = "right" });
+        var (s1, b1) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "B + R", first = "left", move = "e1", opponent = "oracle", computer = "right" });
         Assert.Equal((400, "opponent"), (s1, (string?)b1["path"]));
-        var (s2, b2) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "BR", first = "left", move = "e1", opponent = "random", computer = "right", level = "fierce" });
+        var (s2, b2) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "B + R", first = "left", move = "e1", opponent = "random", computer = "right", level = "fierce" });
         Assert.Equal((400, "level"), (s2, (string?)b2["path"]));
-        var (s3, b3) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "BR", first = "up", move = "e1" });
+        var (s3, b3) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "B + R", first = "up", move = "e1" });
         Assert.Equal((400, "first"), (s3, (string?)b3["path"]));
-        var (s4, b4) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "BR", first = "left", move = "e1", opponent = "engine:hedgehog", computer = "right" });
+        var (s4, b4) = await board.Post("/api/play", new { ruleset = "hackenbush", start = "B + R", first = "left", move = "e1", opponent = "engine:hedgehog", computer = "right" });
         Assert.Equal(400, s4);
         Assert.Contains("no engine 'hedgehog' was named at start", (string)b4["error"]!);
     }

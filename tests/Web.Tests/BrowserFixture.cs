@@ -38,7 +38,8 @@ public sealed class BrowserFixture : IAsyncLifetime
     public async Task<IPage> OpenAsync(int width = 1280, int height = 860)
     {
         var page = await Browser.NewPageAsync(new BrowserNewPageOptions { ViewportSize = new ViewportSize { Width = width, Height = height } });
-        page.SetDefaultTimeout(30_000);
+        // Generous: CI machines are shared, and a wait that ends early is as good as a short one.
+        page.SetDefaultTimeout(60_000);
         await page.GotoAsync(Address);
         await page.WaitForSelectorAsync("body[data-ready='true']");
         return page;

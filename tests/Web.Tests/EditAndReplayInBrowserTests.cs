@@ -64,7 +64,10 @@ public sealed class EditAndReplayInBrowserTests(BrowserFixture browser)
         await page.ClickAsync("#tabs [data-view='edit']");
         await page.SelectOptionAsync("#edit-ruleset", "domineering");
         await page.WaitForSelectorAsync("#edit-rows");
+        // Each size change redraws the tools, so the second waits for the first.
         await page.FillAsync("#edit-rows", "2");
+        await page.DispatchEventAsync("#edit-rows", "change");
+        await page.WaitForFunctionAsync("() => document.querySelector('#edit-text').value === '..../....'");
         await page.FillAsync("#edit-cols", "3");
         await page.DispatchEventAsync("#edit-cols", "change");
         await page.WaitForFunctionAsync("() => document.querySelector('#edit-text').value === '.../...'");

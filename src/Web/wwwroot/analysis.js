@@ -40,13 +40,13 @@ export class AnalysisPanel {
       <td>${c.index}</td><td class="text" title="${esc(c.text)}">${esc(short(c.text))}</td>
       <td>${c.exact ? esc(c.value) : `<span class="inexact">${esc(c.estimate ?? 'not exact')}</span>`}</td>
       <td>${esc(c.outcome ?? '')}</td>
-      <td><button type="button" data-thermo="${c.index}" aria-label="thermograph of component ${c.index}">thermograph</button></td></tr>`).join('');
+      <td><button type="button" data-thermo="${c.index}" aria-label="thermograph of component ${c.index}">show</button></td></tr>`).join('');
     const head = a.exact
       ? `<p>Value <span class="big" data-field="value">${esc(a.value)}</span> &nbsp; class <b data-field="outcome">${esc(a.outcome)}</b>: ${esc(a.outcome_words)}.</p>
          <p data-field="winners">If Left moves next, ${side(a.left_first_wins)} wins.<br>If Right moves next, ${side(a.right_first_wins)} wins.</p>`
       : `<p class="inexact" data-field="inexact"><b>Not exact</b> — ${esc(a.note)}.${a.estimate ? `<br>Estimate: ${esc(a.estimate)}` : ''}</p>`;
     this.element.innerHTML = `<h2>Analysis</h2>${head}
-      <table><thead><tr><th>#</th><th>component</th><th>value</th><th>class</th><th></th></tr></thead><tbody>${rows ||
+      <table><thead><tr><th>#</th><th>component</th><th>value</th><th>class</th><th>thermo&shy;graph</th></tr></thead><tbody>${rows ||
         '<tr><td colspan="5">no components: nobody can move</td></tr>'}</tbody></table>
       <p class="help">${a.components.length} component${a.components.length === 1 ? '' : 's'}, ${a.elapsed_ms} ms.
       Classes: L Left wins, R Right wins, N whoever moves next wins, P whoever moves next loses.</p>`;

@@ -3,7 +3,13 @@
 // cells (data-cell) are picked two at a time and become the domino's top or left cell.
 
 export function show(container, board) {
-  if (board.svg) container.innerHTML = board.svg;
+  if (board.svg) {
+    container.innerHTML = board.svg;
+    // Small positions are drawn larger (bigger targets for fingers), never wider than the screen.
+    const svg = container.querySelector('svg');
+    const width = Number(svg?.getAttribute('width'));
+    if (width) svg.style.width = `min(100%, ${Math.round(width * 1.6)}px)`;
+  }
   else {
     container.innerHTML = '';
     const pre = document.createElement('pre');

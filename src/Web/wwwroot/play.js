@@ -173,7 +173,7 @@ export class PlayView {
       const h = await post('/api/hint', { ...this.request(), budget_ms: 3000 });
       mark($('play-board'), h.winning);
       $('play-reply').innerHTML = h.exact
-        ? `<span id="play-hint-text" data-winning="${esc(h.winning.join(' '))}">Hint: ${h.winning.length ? `winning moves for ${word(h.side)}: <b>${esc(h.winning.join(', '))}</b> (marked on the board with dashes)` : esc(h.note)}</span>`
+        ? `<span id="play-hint-text" data-winning="${esc(h.winning.join(' '))}">Hint: ${h.winning.length ? `winning moves for ${word(h.side)}: <b>${esc(h.winning.join(', '))}</b> (glowing on the board)` : esc(h.note)}</span>`
         : `Hint: ${esc(h.note)}`;
     } catch (e) {
       if (!isAbort(e)) this.error(e.message);

@@ -66,7 +66,7 @@ export class ReplayView {
       this.plies = r.plies;
       const blunderAt = new Map(game.blunders.map(b => [b.ply, b.by]));
       $('replay-plies').innerHTML = r.plies.map(p => `<li data-ply="${p.ply}" class="${blunderAt.has(p.ply) ? 'blunder' : ''}"><button type="button">
-        ${p.ply === 0 ? 'start' : `<span class="side-${p.side}">${word(p.side)}</span> ${esc(p.move)}`}
+        ${p.ply}. ${p.ply === 0 ? 'start' : `<span class="side-${p.side}">${word(p.side)}</span> ${esc(p.move)}`}
         ${p.value != null ? ` · value ${esc(p.value)}` : ' · value not known in time'}
         ${blunderAt.has(p.ply) ? ` <span class="mark">✗ blunder by ${esc(blunderAt.get(p.ply))}</span>` : ''}</button></li>`).join('');
       $('replay-plies').querySelectorAll('[data-ply]').forEach(li => li.querySelector('button').onclick = () => this.go(Number(li.dataset.ply)));
@@ -86,7 +86,7 @@ export class ReplayView {
     const blunder = g.blunders.find(b => b.ply === p.ply);
     $('replay-where').textContent = `ply ${p.ply} of ${this.plies.length - 1}`;
     $('replay-status').innerHTML = (p.ply === 0 ? 'Start position' : `${word(p.side)} (${esc(p.side === 'left' ? g.left : g.right)}) played ${esc(p.move)}`) +
-      (blunder ? ` — <span class="error">blunder: ${esc(blunder.by)} moved from a won position to a lost one</span>` : '') +
+      (blunder ? ` — <span class="blunder-note">✗ blunder: ${esc(blunder.by)} moved from a won position to a lost one</span>` : '') +
       `. ${word(p.to_move)} to move` + (p.value != null ? `; value ${esc(p.value)} (${esc(p.outcome)}), ${word(p.winner)} wins with best play.` : '; exact value not known within the budget.');
     $('replay-plies').querySelectorAll('li').forEach(li => li.classList.toggle('current', Number(li.dataset.ply) === this.at));
     $('replay-plies').querySelector('li.current')?.scrollIntoView({ block: 'nearest' });
