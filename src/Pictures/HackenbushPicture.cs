@@ -24,8 +24,10 @@ public static class HackenbushPicture
         svg.Line(margin / 2, groundY, width - margin / 2, groundY, "ground");
         // Parallel edges between the same two nodes bend apart so each stays visible.
         var seenPairs = new Dictionary<(int, int), int>();
+        var pieceOf = PieceOfEdge(position);
         foreach (var e in layout.Edges)
         {
+            using var group = svg.Group("edge", ("data-move", e.Id.ToString()), ("data-edge", e.Id.Value), ("data-component", pieceOf[e.Id.Value]), ("data-colour", ColourWord(e.Colour)));
             string cls = e.Colour switch { EdgeColour.Blue => "blue", EdgeColour.Red => "red", _ => "green" };
             (double X, double Y) a, b;
             if (e.From == 0 && e.To == 0)
@@ -43,7 +45,8 @@ public static class HackenbushPicture
             {
                 // A loop is a small circle above its node.
                 double r = 14;
-                svg.Add("circle", cls, ("cx", a.X), ("cy", a.Y - r), ("r", r), ("data-edge", e.Id.ToString()));
+                svg.Add("circle", cls, ("cx", a.X), ("cy", a.Y - r), ("r", r));
+                svg.Add("circle", "hit", ("cx", a.X), ("cy", a.Y - r), ("r", r), ("fill", "none"), ("stroke", "transparent"), ("stroke-width", 14.0), ("pointer-events", "stroke"));
                 label = (a.X, a.Y - 2 * r - 4);
             }
             else
@@ -55,7 +58,9 @@ public static class HackenbushPicture
                 double mx = (a.X + b.X) / 2, my = (a.Y + b.Y) / 2;
                 double dx = b.X - a.X, dy = b.Y - a.Y, len = Math.Max(1, Math.Sqrt(dx * dx + dy * dy));
                 double cx = mx - dy / len * bend * 2, cy = my + dx / len * bend * 2;
-                svg.Add("path", cls, ("d", $"M {Bramble.Pictures.Svg.Num(a.X)} {Bramble.Pictures.Svg.Num(a.Y)} Q {Bramble.Pictures.Svg.Num(cx)} {Bramble.Pictures.Svg.Num(cy)} {Bramble.Pictures.Svg.Num(b.X)} {Bramble.Pictures.Svg.Num(b.Y)}"), ("data-edge", e.Id.ToString()));
+                string d = $"M {Bramble.Pictures.Svg.Num(a.X)} {Bramble.Pictures.Svg.Num(a.Y)} Q {Bramble.Pictures.Svg.Num(cx)} {Bramble.Pictures.Svg.Num(cy)} {Bramble.Pictures.Svg.Num(b.X)} {Bramble.Pictures.Svg.Num(b.Y)}";
+                svg.Add("path", cls, ("d", d));
+                svg.HitPath(d);
                 label = (0.25 * a.X + 0.5 * cx + 0.25 * b.X + 10, 0.25 * a.Y + 0.5 * cy + 0.25 * b.Y);
             }
             svg.Text(label.X, label.Y + 4, e.Id.ToString(), null, "start");
@@ -93,6 +98,18 @@ public static class HackenbushPicture
         }
         return sb.ToString().TrimEnd();
     }
+
+    /// <summary>The 1-based piece number (as in <see cref="HackenbushPosition.Components"/>) of every edge id.</summary>
+    private static Dictionary<int, int> PieceOfEdge(HackenbushPosition position)
+    {
+        var map = new Dictionary<int, int>();
+        var parts = position.Components();
+        for (int i = 0; i < parts.Count; i++)
+            foreach (var e in ((HackenbushPosition)parts[i]).Edges) map[e.Id.Value] = i + 1;
+        return map;
+    }
+
+    private static string ColourWord(EdgeColour c) => c switch { EdgeColour.Blue => "blue", EdgeColour.Red => "red", _ => "green" };
 
     private static double Height(HackenbushLayout layout, int node) => node == 0 ? 0 : layout.Nodes[node].Y;
 
