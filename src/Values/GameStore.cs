@@ -53,6 +53,25 @@ public sealed partial class GameStore
     /// <summary>How many distinct games the store holds.</summary>
     public int Count => _left.Count;
 
+    /// <summary>
+    /// Called every <see cref="InterruptPeriod"/> order tests and constructions; a caller with a
+    /// budget or a cancel throws from it to stop a long computation. One canonical form can take
+    /// minutes (a long mixed Hackenbush stalk), and its caller's own checks between values never
+    /// run in the meantime. The store stays consistent when it throws: every cache entry is
+    /// written only once its answer is complete.
+    /// </summary>
+    public Action? Interrupt { get; set; }
+
+    private const int InterruptPeriod = 1024;
+    private int _untilInterrupt = InterruptPeriod;
+
+    private void Poll()
+    {
+        if (--_untilInterrupt > 0) return;
+        _untilInterrupt = InterruptPeriod;
+        Interrupt?.Invoke();
+    }
+
     // ---------------------------------------------------------------- construction
 
     public Game Number(Dyadic value)
@@ -146,6 +165,7 @@ public sealed partial class GameStore
 
     private Game MakeFromLists(List<int> l, List<int> r)
     {
+        Poll();
         SortUnique(l);
         SortUnique(r);
         if (TryNumberRule(l, r, out var quick)) return quick;
@@ -448,6 +468,7 @@ public sealed partial class GameStore
     private bool Leq(int a, int b)
     {
         if (TrySettle(a, b, out bool settled)) return settled;
+        Poll();
         // A refutation that needs no search is looked for first, over all options, before any
         // option is searched: the first search would otherwise often go deep for nothing. The
         // options settled there (the first 64 of a side) are not asked again.
