@@ -28,6 +28,19 @@ public static class ValueNotation
     /// <summary>Splits a top-level sum into its terms as written (a subtracted term comes back negated), with 0-based start columns.</summary>
     public static IReadOnlyList<(ValueExpr Term, int Column)> ParseTerms(string text)
     {
+        // Reading recurses once per nesting level (a few frames each): a text long enough to
+        // nest deeply is read on a stack of its own, so the caller's stack size does not matter.
+        if (text.Length > DeepTextLength) return BigStack.Run(() => ParseTermsHere(text), ReadingStackBytes);
+        return ParseTermsHere(text);
+    }
+
+    /// <summary>Texts longer than this are read on a stack of <see cref="ReadingStackBytes"/>.</summary>
+    private const int DeepTextLength = 2000;
+
+    private const int ReadingStackBytes = 64 * 1024 * 1024;
+
+    private static IReadOnlyList<(ValueExpr Term, int Column)> ParseTermsHere(string text)
+    {
         var p = new Parser(text);
         var (terms, parts) = p.ParseScope(0, text.Length, nested: false);
         if (parts is null) return terms;
