@@ -20,6 +20,15 @@ public sealed class Svg(double width, double height)
     public void Text(double x, double y, string text, string? cssClass = null, string anchor = "middle") =>
         Put(Element("text", cssClass, text, [("x", x), ("y", y), ("text-anchor", anchor)]));
 
+    /// <summary>Text in two parts, the second in its own style (a coloured letter after an edge label).</summary>
+    public void Label(double x, double y, string first, string second, string? cssClass, string secondClass)
+    {
+        var t = Element("text", cssClass, null, [("x", x), ("y", y), ("text-anchor", "start")]);
+        t.Add(new XText(first));
+        t.Add(Element("tspan", secondClass, second, []));
+        Put(t);
+    }
+
     /// <summary>
     /// Opens a &lt;g&gt; carrying the given attributes (the data-* names a web page reads); every
     /// element added until the returned handle is disposed goes inside it.

@@ -21,8 +21,12 @@ public class HackenbushPictureTests
         Assert.Equal(edges, marks.Count);
         var ids = marks.Select(m => (string)m.Attribute("data-move")!).ToHashSet();
         Assert.Equal(position.Edges.Select(e => e.Id.ToString()).ToHashSet(), ids);
-        var labels = doc.Descendants(Ns + "text").Select(t => t.Value).ToHashSet();
+        // Each label is the edge id followed by its colour letter, e.g. "e3 R".
+        var labels = doc.Descendants(Ns + "text").Select(t => t.Value.Split(' ')[0]).ToHashSet();
         Assert.Superset(ids, labels);
+        var letters = doc.Descendants(Ns + "g").Where(g => g.Attribute("data-edge") is not null)
+            .Select(g => g.Element(Ns + "text")!.Value).ToList();
+        Assert.Equal(position.Edges.Select(e => $"{e.Id} {e.Colour.Letter()}"), letters);
     }
 
     [Fact]
