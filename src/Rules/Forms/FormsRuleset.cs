@@ -10,7 +10,13 @@ public sealed class FormsRuleset : IRuleset
 {
     public string Name => "forms";
 
-    public IPosition Parse(string text)
+    /// <summary>Texts longer than this may nest deeply: they are read, and their terms written, on a stack of their own.</summary>
+    private const int DeepTextLength = 2000;
+
+    public IPosition Parse(string text) =>
+        text.Length > DeepTextLength ? BigStack.Run(() => ParseHere(text), 64 * 1024 * 1024) : ParseHere(text);
+
+    private FormsPosition ParseHere(string text)
     {
         IReadOnlyList<(ValueExpr Term, int Column)> terms;
         try
