@@ -29,6 +29,7 @@ public static class Entry
         root.Subcommands.Add(SolveVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
+        root.Subcommands.Add(ComposeVerb.Build());
 
         var parse = root.Parse(args);
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
