@@ -77,8 +77,10 @@ public static class ComposeVerb
     private static string Searched(ComposeReport r)
     {
         var what = r.Sampled ? "sampled components" : "every position";
-        var range = r.SearchedThrough < 0 ? "no size completely" : $"{what} of up to {r.SearchedThrough} {r.SizeUnit}";
-        return $"{range} (at least {r.LeastSize} needed); {r.ComponentsTried:N0} components valued, {r.SumsTried:N0} sums tried, {r.ElapsedMs:N0} ms";
+        var range = r.SearchedThrough < r.LeastSize
+            ? $"sizes below {r.LeastSize} ruled out by the birthday bound; no size looked at in full"
+            : $"{what} of up to {r.SearchedThrough} {r.SizeUnit} (sizes below {r.LeastSize} ruled out by the birthday bound)";
+        return $"{range}; {r.ComponentsTried:N0} components valued, {r.SumsTried:N0} sums tried, {r.ElapsedMs:N0} ms";
     }
 
     private static string StopText(ComposeReport r) => r.Stop switch

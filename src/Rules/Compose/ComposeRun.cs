@@ -73,7 +73,7 @@ internal sealed class ComposeRun(
         if (!Enough && built.Count > 0)
         {
             context.ResetCounters();
-            foreach (var p in built)
+            foreach (var p in built.Where(p => p.Size <= bound))
             {
                 if (Enough) break;
                 Accept(p, ComposeRoute.Construction);
@@ -232,7 +232,8 @@ internal sealed class ComposeRun(
     {
         if (progress is null) return;
         long now = _clock.ElapsedMilliseconds;
-        if (!force && now - _lastReportMs < 1000) return;
+        // Quick runs stay quiet; long ones say where they are about once a second.
+        if (now < 1000 || (!force && now - _lastReportMs < 1000)) return;
         _lastReportMs = now;
         progress.Report(new ComposeProgress(size, source.SizeUnit, _componentsTried, _sumsTried, _found.Count, now));
     }
