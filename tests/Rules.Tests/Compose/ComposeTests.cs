@@ -120,7 +120,6 @@ public class ComposeTests
     // positions of size 1+5n with these values" — so ↑, ↓ within 6 cells and ⇑ within 11.
     [InlineData("↑", 6)]
     [InlineData("↓", 6)]
-    [InlineData("⇑", 11)]
     // From memory: the L-tromino is *, the 2×2 square is ±1, a three-by-one bent strip gives 1/2 on four cells.
     [InlineData("*", 3)]
     [InlineData("±1", 4)]
@@ -132,6 +131,22 @@ public class ComposeTests
         var found = Assert.Single(report.Positions);
         Assert.True(found.Size <= cells, $"{found.Position.Text} has {found.Size} cells");
         Assert.Equal(store.Parse(target), PlainDomineeringValue(found.Position, store));
+    }
+
+    [Fact]
+    public void DoubleUpAndStarTwoComeWithinThePublishedDomineeringSizes()
+    {
+        var store = new GameStore();
+        var context = new ValueContext(store);
+        // Uiterwijk and Barton, TCS 2015, abstract: n·↑ on "positions of size 1+5n" — ⇑ within 11 cells.
+        var up2 = Assert.Single(Compose(new DomineeringRuleset(), "⇑", maxSize: 11, context: context).Positions);
+        Assert.True(up2.Size <= 11, up2.Position.Text);
+        Assert.Equal(store.Parse("⇑"), PlainDomineeringValue(up2.Position, store));
+        // Same paper: "endgame databases for all single-component positions up to 15 squares", in which
+        // "we find many Domineering positions with values up to *3" — so *2 within 15 cells.
+        var star2 = Assert.Single(Compose(new DomineeringRuleset(), "*2", maxSize: 15, context: context).Positions);
+        Assert.True(star2.Size <= 15, star2.Position.Text);
+        Assert.Equal(store.Nimber(2), PlainDomineeringValue(star2.Position, store));
     }
 
     [Fact]
