@@ -59,9 +59,10 @@ internal sealed class ComposeRun(
                 while (_listed < Math.Min(n, listingLimit)) List(_listed + 1);
                 _round = n;
                 if (n > 0) SearchSums(n);
+                // A search cut short by having found enough did not look at all of size n.
+                if (Enough) { stop = ComposeStop.Enough; break; }
                 if (n <= listingLimit || n == 0) searched = n;
                 else stop = ComposeStop.ListingLimit;
-                if (Enough) { stop = ComposeStop.Enough; break; }
             }
         }
         catch (BudgetExceededException)
@@ -172,7 +173,7 @@ internal sealed class ComposeRun(
             if (s == free) { result = _examples[s].ContainsKey(missing); continue; }
             foreach (var v in _values[s])
             {
-                _sumsTried++;
+                if ((++_sumsTried & 1023) == 0) CheckBudget();
                 if (Completable(_store.Subtract(missing, v), free - s)) { result = true; break; }
             }
         }
