@@ -30,6 +30,7 @@ public static class Entry
         root.Subcommands.Add(SolveVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
+        root.Subcommands.Add(ServeVerb.Build());
         return root;
     }
 
