@@ -3,7 +3,7 @@ using Bramble.Values;
 namespace Bramble.Rules.Forms;
 
 /// <summary>
-/// Explicit game forms: a position is a sum of value-notation terms (SPEC.md §2–3), each term a
+/// Explicit game forms: a position is a sum of value-notation terms (docs/forms.md, docs/values.md), each term a
 /// component whose value is the canonical form of its expression.
 /// </summary>
 public sealed class FormsRuleset : IRuleset
