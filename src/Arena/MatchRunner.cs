@@ -177,7 +177,7 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
 
         private async Task WorkAsync(EnginePool pool, CancellationToken cancel)
         {
-            var analyst = new Analyst(options.Log);
+            var analyst = new Analyst(options.Log, cancel);
             var referee = new Referee(options.Timeouts, options.Log);
             while (!cancel.IsCancellationRequested)
             {

@@ -17,19 +17,17 @@ public sealed record GameReview(Side? Theory, IReadOnlyList<Blunder> Blunders, i
 /// move — the winner moving first for the outcome class of v. Running out of budget means "not
 /// known", never a guess. One analyst per game worker: the value store behind it is not
 /// thread-safe, and keeping it from game to game lets the memo of component values pay off.
+/// A cancel (the match is stopping) ends any analysis in progress at once, as "not known".
 /// </summary>
-public sealed class Analyst(ILogger log)
+public sealed class Analyst(ILogger log, CancellationToken cancel = default)
 {
     private const int StoreLimit = 2_000_000;
     private ValueContext _context = new();
     private readonly HashSet<string> _warned = new(StringComparer.Ordinal);
 
     /// <summary>The winner of <paramref name="position"/> with <paramref name="mover"/> to move, or null when not known within the budget.</summary>
-    public Side? Winner(IPosition position, Side mover, long budgetMs)
-    {
-        var value = Value(position, budgetMs);
-        return value is { } v ? _context.Store.OutcomeOf(v).WinnerMovingFirst(mover) : null;
-    }
+    public Side? Winner(IPosition position, Side mover, long budgetMs) =>
+        Budgeted(position, budgetMs, v => _context.Store.OutcomeOf(v).WinnerMovingFirst(mover));
 
     /// <summary>
     /// For <c>adjudicate: numbers</c>: when every component is a number the sum x is a number, and
@@ -41,8 +39,7 @@ public sealed class Analyst(ILogger log)
         var clock = Stopwatch.StartNew();
         foreach (var component in position.Components())
         {
-            var value = Value(component, budgetMs - clock.ElapsedMilliseconds);
-            if (value is not { } v || !_context.Store.IsNumber(v)) return null;
+            if (Budgeted(component, budgetMs - clock.ElapsedMilliseconds, v => _context.Store.IsNumber(v)) != true) return null;
         }
         return Winner(position, mover, budgetMs - clock.ElapsedMilliseconds);
     }
@@ -77,14 +74,19 @@ public sealed class Analyst(ILogger log)
         return new GameReview(winners[0], blunders, winners.Count - 1);
     }
 
-    private Game? Value(IPosition position, long budgetMs)
+    /// <summary>
+    /// <paramref name="read"/> of the position's value, both within the budget: the store's own
+    /// long computations (one canonical form of a long mixed stalk takes minutes) answer to it too.
+    /// </summary>
+    private T? Budgeted<T>(IPosition position, long budgetMs, Func<Game, T> read) where T : struct
     {
-        if (budgetMs <= 0) return null;
+        if (budgetMs <= 0 || cancel.IsCancellationRequested) return null;
         if (_context.Store.Count > StoreLimit) _context = new ValueContext();
+        _context.Cancellation = cancel;
         _context.ResetCounters(budgetMs);
         try
         {
-            return position.Ruleset.Value(position, _context);
+            return read(position.Ruleset.Value(position, _context));
         }
         catch (BudgetExceededException)
         {
@@ -97,6 +99,10 @@ public sealed class Analyst(ILogger log)
                 if (_warned.Add(position.Ruleset.Name + e.GetType().Name))
                     log.Warning("Exact analysis of {Ruleset} positions failed ({Error}); theory and blunders stay unknown for them", position.Ruleset.Name, e.Message);
             return null;
+        }
+        finally
+        {
+            _context.EndBudget();
         }
     }
 }

@@ -3,14 +3,20 @@ using Bramble.Values;
 namespace Bramble.Rules.Forms;
 
 /// <summary>
-/// Explicit game forms: a position is a sum of value-notation terms (SPEC.md §2–3), each term a
+/// Explicit game forms: a position is a sum of value-notation terms (docs/forms.md, docs/values.md), each term a
 /// component whose value is the canonical form of its expression.
 /// </summary>
 public sealed class FormsRuleset : IRuleset, IComposable
 {
     public string Name => "forms";
 
-    public IPosition Parse(string text)
+    /// <summary>Texts longer than this may nest deeply: they are read, and their terms written, on a stack of their own.</summary>
+    private const int DeepTextLength = 2000;
+
+    public IPosition Parse(string text) =>
+        text.Length > DeepTextLength ? BigStack.Run(() => ParseHere(text), 64 * 1024 * 1024) : ParseHere(text);
+
+    private FormsPosition ParseHere(string text)
     {
         IReadOnlyList<(ValueExpr Term, int Column)> terms;
         try

@@ -3,7 +3,7 @@ using Bramble.Values;
 namespace Bramble.Rules.Hackenbush;
 
 /// <summary>
-/// Blue-red-green Hackenbush on any graph with a ground: notation of SPEC.md §3, exact values by
+/// Blue-red-green Hackenbush on any graph with a ground: notation of docs/hackenbush.md, exact values by
 /// the fastest method that applies to each part (<see cref="PieceEvaluator"/>), generators of
 /// random positions.
 /// </summary>

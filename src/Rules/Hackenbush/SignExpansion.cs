@@ -105,7 +105,7 @@ public static class SignExpansion
 
     /// <summary>
     /// 1:x, a blue edge carrying x, by arithmetic: x + 1 when x ≥ 0, else (x + j)/2^(j−1) with j
-    /// the least positive integer such that x + j &gt; 1 — the rule for trees in CHECKS.md §2, kept
+    /// the least positive integer such that x + j &gt; 1 — the rule for trees in Winning Ways (from memory), kept
     /// as an independent second route to the same numbers.
     /// </summary>
     public static Dyadic BlueUnder(Dyadic x)
