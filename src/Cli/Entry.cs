@@ -31,6 +31,7 @@ public static class Entry
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
         root.Subcommands.Add(ServeVerb.Build());
+        root.Subcommands.Add(ComposeVerb.Build());
         return root;
     }
 

@@ -97,7 +97,8 @@ public static class SignExpansion
         for (int i = 1; i <= t - 1; i++)
         {
             int position = t - i;
-            bool bit = (bits[position >> 3] >> (position & 7) & 1) == 1;
+            // The byte array stops at the numerator's highest one bit: positions above it are zeros.
+            bool bit = (position >> 3) < bits.Length && (bits[position >> 3] >> (position & 7) & 1) == 1;
             Append(runs, bit ? sigma : -sigma, 1);
         }
     }
