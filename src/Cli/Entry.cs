@@ -31,6 +31,7 @@ public static class Entry
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
         root.Subcommands.Add(ServeVerb.Build());
+        root.Subcommands.Add(ComposeVerb.Build());
         return root;
     }
 
@@ -88,6 +89,15 @@ public static class Entry
                 }
                 Console.Error.WriteLine($"see 'bramble {CommandPath(parse.CommandResult)}--help'");
                 return BadInput;
+            }
+            if (IsHelpOrVersion(args))
+            {
+                // The library writes a subcommand's usage under its parent's arguments
+                // ("bramble match [<spec>] merge"); the help is caught and tidied.
+                var help = new StringWriter();
+                int code = parse.Invoke(new InvocationConfiguration { Output = help });
+                Console.Out.Write(help.ToString().Replace("match [<spec>] merge", "match merge", StringComparison.Ordinal));
+                return code;
             }
             return parse.Invoke();
         }

@@ -3,7 +3,7 @@ using System.Text;
 namespace Bramble.Values;
 
 /// <summary>
-/// The value notation of SPEC.md §2, in: numbers, nimbers, ups and downs (symbols or the ASCII
+/// The value notation of docs/values.md, in: numbers, nimbers, ups and downs (symbols or the ASCII
 /// words), ±x, braces with the multi-bar shorthand, sums, differences and parentheses.
 /// </summary>
 public static class ValueNotation

@@ -13,7 +13,7 @@ public static class ValueVerb
     {
         var ruleset = new Argument<string>("ruleset") { Description = "forms, hackenbush or domineering" };
         var position = new Argument<string>("position") { Description = "position text, @file (read whole), or - for stdin" };
-        var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/values.md)" };
+        var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
         var ascii = new Option<bool>("--ascii") { Description = "Print only ASCII: up, down, +-x and words instead of the symbols" };
         var budget = new Option<long?>("--budget-ms") { Description = "Give up after this many milliseconds and say the value is not exact within the budget (default: no limit)" };
         var command = new Command("value", "Exact canonical value of a position and of each component") { ruleset, position, json, ascii, budget };
