@@ -53,7 +53,16 @@ public sealed class Opponents(ContextPool contexts, EngineRoster engines)
                 contexts.Return(context);
             }
         }
-        var after = game.With(text, "opponent");
+        GameState after;
+        try
+        {
+            after = game.With(text, "opponent");
+        }
+        catch (ApiException e) when (opponent.StartsWith(EnginePrefix, StringComparison.Ordinal))
+        {
+            // The person asked nothing wrong: the engine did.
+            throw new ApiException(502, $"engine '{opponent[EnginePrefix.Length..]}' picked an illegal move: {e.Message}", "opponent");
+        }
         return (after, new ReplyMove(side.Word(), after.Played[^1].Text, opponent, clock.ElapsedMilliseconds, exact, note));
     }
 }
