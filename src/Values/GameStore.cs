@@ -599,6 +599,10 @@ public sealed partial class GameStore
     /// <summary>Smaller than every positive number and larger than every negative one (0 included).</summary>
     public bool IsInfinitesimal(Game g) => g == Zero || (!IsNumber(g) && LeftStop(g).IsZero && RightStop(g).IsZero);
 
+    /// <summary>
+    /// The birthday, saturating at <see cref="int.MaxValue"/> (a huge number such as 10^30 is born
+    /// that late); <see cref="ExactBirthday"/> gives the true figure for such games.
+    /// </summary>
     public int Birthday(Game g)
     {
         int cached = _birthday[g.Id];
@@ -606,19 +610,39 @@ public sealed partial class GameStore
         int b;
         if (_number[g.Id] is { } x)
         {
-            var abs = x.Abs();
-            b = abs.IsInteger ? (int)abs.Numerator : (int)abs.Floor() + 1 + abs.Exponent;
+            var day = NumberBirthday(x);
+            b = day >= int.MaxValue ? int.MaxValue : (int)day;
         }
         else if (_tag[g.Id] is { X.IsZero: true, N: 0 } nim) b = nim.M;
         else
         {
             b = 0;
-            foreach (int o in LeftIds(g.Id)) b = Math.Max(b, Birthday(new Game(o)) + 1);
-            foreach (int o in RightIds(g.Id)) b = Math.Max(b, Birthday(new Game(o)) + 1);
+            foreach (int o in LeftIds(g.Id)) b = Math.Max(b, Later(Birthday(new Game(o))));
+            foreach (int o in RightIds(g.Id)) b = Math.Max(b, Later(Birthday(new Game(o))));
         }
         _birthday[g.Id] = b;
         return b;
     }
+
+    /// <summary>The birthday without saturation (only worth asking when <see cref="Birthday"/> is int.MaxValue).</summary>
+    public System.Numerics.BigInteger ExactBirthday(Game g)
+    {
+        int day = Birthday(g);
+        if (day < int.MaxValue) return day;
+        if (_number[g.Id] is { } x) return NumberBirthday(x);
+        System.Numerics.BigInteger b = 0;
+        foreach (int o in LeftIds(g.Id)) b = System.Numerics.BigInteger.Max(b, ExactBirthday(new Game(o)) + 1);
+        foreach (int o in RightIds(g.Id)) b = System.Numerics.BigInteger.Max(b, ExactBirthday(new Game(o)) + 1);
+        return b;
+    }
+
+    private static System.Numerics.BigInteger NumberBirthday(Dyadic x)
+    {
+        var abs = x.Abs();
+        return abs.IsInteger ? abs.Numerator : abs.Floor() + 1 + abs.Exponent;
+    }
+
+    private static int Later(int day) => day == int.MaxValue ? day : day + 1;
 
     // ---------------------------------------------------------------- helpers
 

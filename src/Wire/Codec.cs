@@ -14,7 +14,7 @@ public readonly record struct Parsed<T>(T? Message, WireError? Error) where T : 
 
 /// <summary>
 /// The twine/1 codec: lines (without their terminator) to message records and back. Strict about
-/// the shape SPEC.md §4 fixes (single spaces, lower-case words, whole non-negative numbers), lenient
+/// the shape docs/protocol.md fixes (single spaces, lower-case words, whole non-negative numbers), lenient
 /// where it promises to be (unknown <c>key=value</c> pairs are ignored). Stateless and thread-safe.
 /// </summary>
 public static class Codec
@@ -89,7 +89,7 @@ public static class Codec
         long? clock = null, inc = null;
         foreach (var pair in pairs)
         {
-            if (pair.Key is not ("clock" or "inc")) continue; // unknown keys are ignored (SPEC.md §4)
+            if (pair.Key is not ("clock" or "inc")) continue; // unknown keys are ignored (docs/protocol.md)
             if (!TryNumber(pair.Value, out var ms))
                 return Error(ErrorCodes.BadRequest, $"column {pair.Column + 1}: {pair.Key}= needs whole milliseconds, got {Quote(pair.Value)}");
             if (pair.Key == "clock") clock = ms; else inc = ms;
@@ -295,7 +295,7 @@ public static class Codec
     private static WireError SideError(Token token) =>
         new(ErrorCodes.BadRequest, $"column {token.Column + 1}: expected a side, left or right, got {Quote(token.Text)}");
 
-    /// <summary>Whole non-negative numbers in plain digits, as SPEC.md writes milliseconds.</summary>
+    /// <summary>Whole non-negative numbers in plain digits, as the protocol writes milliseconds.</summary>
     private static bool TryNumber(string text, out long value)
     {
         value = 0;

@@ -2,7 +2,7 @@ using Bramble.Values;
 
 namespace Bramble.Wire.Tests;
 
-// The expected lines below are the shapes of SPEC.md §4 (the project's own protocol table).
+// The expected lines below are the shapes of docs/protocol.md (the project's own protocol table).
 public class CodecTests
 {
     public static TheoryData<string, Request> RequestLines => new()

@@ -8,7 +8,7 @@ namespace Bramble.Arena.Engines;
 /// Turns a player's <c>run</c> argv into what is started. Nothing passes through a shell. A
 /// relative program path (one with a slash, like <c>./engines/mine</c>) is taken from the spec's
 /// folder, and the engine runs in that folder so its own relative arguments mean the same. An
-/// argv[0] of <c>bramble</c> that is not on PATH is this very program (SPEC.md §5), so the demo
+/// argv[0] of <c>bramble</c> that is not on PATH is this very program (docs/matches.md), so the demo
 /// runs from a fresh checkout.
 /// </summary>
 public static class EngineCommand

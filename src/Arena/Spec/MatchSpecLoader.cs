@@ -4,7 +4,7 @@ using Bramble.Rules;
 namespace Bramble.Arena.Spec;
 
 /// <summary>
-/// Reads a match spec (SPEC.md §5) and checks all of it before anything runs: every problem is
+/// Reads a match spec (docs/matches.md) and checks all of it before anything runs: every problem is
 /// collected with its JSON path and reported together in one <see cref="MatchSpecException"/>, so
 /// a user fixes a file in one go rather than one error per run. Positions are parsed with their
 /// ruleset here, so a typing mistake in line 90 of a suite stops the match before game 1.

@@ -23,7 +23,7 @@ public static class MatchVerb
     {
         var spec = new Argument<string?>("spec") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
         var resume = new Option<bool>("--resume") { Description = "Continue the journal, skipping the games it holds" };
-        var shard = new Option<string?>("--shard") { Description = "Play only the games whose id ≡ K (mod N), into a journal of their own" };
+        var shard = new Option<string?>("--shard") { Description = "K/N: play only the games whose id ≡ K (mod N), into a journal of their own (e.g. 0/4)", HelpName = "K/N" };
         var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)" };
         var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
         var createFolders = new Option<bool>("--create-folders") { Description = "Let the match make its journal's folder even outside the match file's folder" };
@@ -279,7 +279,8 @@ public static class MatchVerb
             var line = Format(_last!);
             if (inPlace)
             {
-                error.Write("\r" + line.PadRight(_width));
+                SafeWriter.CarriageReturn(error);
+                error.Write(line.PadRight(_width));
                 _width = Math.Max(_width, line.Length);
             }
             else error.WriteLine(line);

@@ -246,7 +246,7 @@ public sealed class EngineHost
             Reply(Err(ErrorCodes.BadPosition, $"column {e.Column + 1}: expected {e.Expected}, found {Found(e.Text, e.Column)}"));
             return;
         }
-        catch (Exception e) when (e is FormatException or ArgumentException)
+        catch (Exception e) when (e is FormatException or ArgumentException or OverflowException)
         {
             Reply(Err(ErrorCodes.BadPosition, e.Message));
             return;
