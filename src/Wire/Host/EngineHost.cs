@@ -32,6 +32,7 @@ public sealed class EngineHost
     private LineWriter _out = null!;
     private int _served;
     private readonly ManualResetEventSlim _finished = new();
+    private long _taken;
 
     public EngineHost(EngineSetup? setup = null)
     {
@@ -67,6 +68,7 @@ public sealed class EngineHost
     {
         foreach (var (index, line) in queue.GetConsumingEnumerable())
         {
+            Interlocked.Increment(ref _taken);
             if (line is null) break;
             var parsed = line.Value.Text is { } text ? Codec.ParseRequest(text) : new Parsed<Request>(null, line.Value.Error);
             if (parsed.Message is HaltRequest) continue; // already acted on by the reading thread
@@ -130,17 +132,28 @@ public sealed class EngineHost
     }
 
     /// <summary>
-    /// At end of input the session ends as soon as the request in hand is answered; when that takes
-    /// longer than <see cref="EngineSetup.EndGrace"/> (a long computation that does not look at the
-    /// clock), <see cref="EngineSetup.ForceExit"/> ends the process: the harness is gone (perhaps
-    /// killed), and an engine must never outlive it thinking for nobody.
+    /// At end of input the requests already read are still answered, in order (a script may send
+    /// everything and then close its end); but when one request stays in hand longer than
+    /// <see cref="EngineSetup.EndGrace"/> (a long computation), <see cref="EngineSetup.ForceExit"/>
+    /// ends the process: the harness may be gone (killed), and an engine must never outlive it
+    /// thinking for nobody.
     /// </summary>
     private void WatchEnd()
     {
         if (_setup.ForceExit is not { } exit) return;
-        if (_finished.Wait(_setup.EndGrace)) return;
-        _log.Warning("end of input while still busy: exiting");
-        exit(0);
+        var seen = Interlocked.Read(ref _taken);
+        while (!_finished.Wait(_setup.EndGrace))
+        {
+            var now = Interlocked.Read(ref _taken);
+            if (now != seen)
+            {
+                seen = now;
+                continue;
+            }
+            _log.Warning("end of input while still busy: exiting");
+            exit(0);
+            return;
+        }
     }
 
     private static void TryAdd(BlockingCollection<Numbered> queue, Numbered item)
