@@ -219,8 +219,14 @@ public sealed class PerfectPlayer : IPlayer
         if (components.Any(c => c.Value is null)) return null;
         var store = Context.Store;
         var (key, offset) = _sums.Normalise(components.Select(c => c.Value!.Value));
-        var terms = key.Games.Select(g => store.Format(g)).ToList();
-        if (!offset.IsZero || terms.Count == 0) terms.Add(store.Format(store.Number(offset)));
+        // One writer for one value: a sum of at most one game and a number (3/4 + * is 3/4*)
+        // is written as that value is everywhere else; a longer sum keeps its terms, as
+        // 'value' lists components.
+        var games = key.Games.ToList();
+        if (games.Count <= 1)
+            return store.Format(games.Count == 0 ? store.Number(offset) : store.Add(games[0], store.Number(offset)));
+        var terms = games.Select(g => store.Format(g)).ToList();
+        if (!offset.IsZero) terms.Add(store.Format(store.Number(offset)));
         return string.Join(" + ", terms);
     }
 

@@ -9,7 +9,7 @@ namespace Bramble.Search;
 /// <param name="Line">The principal line the search reported (winning moves for the winner, stubborn defence for the loser), when it has one.</param>
 public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact, IReadOnlyList<string>? Line = null);
 
-/// <summary>What <c>bramble solve</c> reports (SPEC.md §7).</summary>
+/// <summary>What <c>bramble solve</c> reports (docs/cli.md).</summary>
 /// <param name="Outcome">The outcome class, when both sides were solved exactly.</param>
 public sealed record SolveReport(Outcome? Outcome, SolveAnswer? LeftFirst, SolveAnswer? RightFirst, long Nodes, long ElapsedMs, string Strategy, bool Exact);
 
