@@ -66,13 +66,17 @@ public sealed class PerfectPlayer : IPlayer
         if (Settings.WholeBoard && position is DomineeringPosition board && WholeBoard.Fits(board.Board)
             && position.Components().Any(c => c.Size > Settings.ExactSize))
         {
-            var answer = _board.Solve(board, side, () => b.Spent);
+            // Half the time for the exact search, the rest for the depth-limited one if that fails.
+            long exactMs = totalMs == long.MaxValue ? long.MaxValue : totalMs / 2;
+            var answer = _board.Solve(board, side, () => b.Spent || clock.ElapsedMilliseconds >= exactMs);
             if (answer.Win is { } win)
                 return new Decision(answer.Move, answer.Nodes, b.ElapsedMs, Exact: true, Winning: win,
                     Line: answer.Line.Select(position.FormatMove).ToList());
-            long left = totalMs == long.MaxValue ? long.MaxValue : Math.Max(0, totalMs - clock.ElapsedMilliseconds);
-            b.Add(answer.Nodes);
-            return Fallback(position, side, b, left, halt, clock);
+            // Out of budget: the depth-limited search on the same counts, in the time kept back.
+            long deadline = totalMs == long.MaxValue ? long.MaxValue : totalMs;
+            var play = _board.Play(board, side, () => halt.IsCancellationRequested || clock.ElapsedMilliseconds >= deadline);
+            return new Decision(play.Move, answer.Nodes + play.Nodes, clock.ElapsedMilliseconds, Exact: false,
+                Line: [position.FormatMove(play.Move)]);
         }
 
         IReadOnlyList<ValuedComponent> components;

@@ -275,6 +275,51 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         return false;
     }
 
+    /// <summary>Score of a proven win in the depth-limited search (minus the plies to reach it).</summary>
+    public const int ProvenWin = 10_000;
+
+    /// <summary>
+    /// Depth-limited negamax score of side s to move, for play where the board cannot be solved:
+    /// proven outcomes (no move, the safe-move bounds, the table) score ±<see cref="ProvenWin"/>;
+    /// at the horizon the evaluation is the same counts, own minus the opponent's
+    /// (possible moves + 3 × safe moves). Moves in the order of the exact search.
+    /// </summary>
+    public int Score(int s, int depth, int alpha, int beta, int ply = 0)
+    {
+        Nodes++;
+        if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
+        if (_stop.IsSet) return 0;
+        T me = _board[s];
+        int w = _shape.Width[s];
+        if ((me & (me >> w)) == T.Zero) return -ProvenWin + ply;
+        var (possible, safe, spare) = Counts(s);
+        var (oppPossible, oppSafe, oppSpare) = Counts(1 - s);
+        if (Guaranteed(safe, spare, movesFirst: true) > oppPossible) return ProvenWin - ply;
+        if (Guaranteed(oppSafe, oppSpare, movesFirst: false) >= possible) return -ProvenWin + ply;
+        if (_table.TryGet(Key(s, out _), out bool known, out _)) return known ? ProvenWin - ply : -ProvenWin + ply;
+        if (depth <= 0) return possible + 3 * safe - oppPossible - 3 * oppSafe;
+        Span<int> moves = stackalloc int[_shape.Cells];
+        int n = Generate(s, ply, moves);
+        T other = _board[1 - s];
+        int best = -ProvenWin - 1;
+        for (int k = 0; k < n; k++)
+        {
+            int i = moves[k];
+            Play(s, i);
+            int v = -Score(1 - s, depth - 1, -beta, -alpha, ply + 1);
+            Undo(s, i, me, other);
+            if (_stop.IsSet) return 0;
+            if (v > best) best = v;
+            if (v > alpha) alpha = v;
+            if (alpha >= beta)
+            {
+                Reward(s, ply, i, 1L << Math.Min(depth, 40));
+                break;
+            }
+        }
+        return best;
+    }
+
     private void Reward(int s, int ply, int move, long work)
     {
         if (!_options.KillersAndHistory) return;

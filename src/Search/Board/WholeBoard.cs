@@ -30,8 +30,12 @@ public sealed class WholeBoard
 
     public BoardSearchOptions Options { get; }
 
-    /// <summary>Receives progress about once a second from the first root thread; null for none.</summary>
-    public Action<BoardProgress>? Progress { get; set; }
+    // What a running solve is doing, read by Current from another thread (for progress reports).
+    private Func<long>? _liveNodes;
+    private Stopwatch? _liveClock;
+    private int _liveRoot = -1;
+    private int[]? _liveMoves;
+    private int _liveSide;
 
     /// <summary>The table of the last shape solved (for saving and resuming).</summary>
     public OutcomeTable? Table => _table;
@@ -57,12 +61,99 @@ public sealed class WholeBoard
             : Run<UInt128>(_shape, _table!, empty, toMove, spent);
     }
 
-    /// <summary>Replaces the table by one read from a stream written by <see cref="OutcomeTable.Save"/> (same shape and size).</summary>
-    public void LoadTable(int rows, int columns, BinaryReader reader)
+    /// <summary>
+    /// Play where the board cannot be solved in time: iterative deepening of the depth-limited
+    /// search (<see cref="BoardSearch{T}.Score"/>) until <paramref name="spent"/> says stop; the
+    /// best root move of the last finished depth (the first move when not even depth 1 finished).
+    /// </summary>
+    public (Move Move, int Depth, int Score, long Nodes) Play(DomineeringPosition position, Side toMove, Func<bool> spent)
     {
-        _shape = new BoardShape(rows, columns);
-        _table = new OutcomeTable(Options.TableLog2);
-        _table.Load(reader);
+        var board = position.Board;
+        var shape = _shape is not null && _shape.Rows == board.Rows && _shape.Columns == board.Columns ? _shape : new BoardShape(board.Rows, board.Columns);
+        if (!ReferenceEquals(shape, _shape))
+        {
+            _shape = shape;
+            _table = new OutcomeTable(Options.TableLog2);
+        }
+        var empty = new bool[shape.Cells];
+        for (int r = 0; r < board.Rows; r++)
+            for (int c = 0; c < board.Columns; c++)
+                empty[r * board.Columns + c] = board.IsEmpty(r, c);
+        return shape.Cells <= 64 ? Deepen<ulong>(shape, empty, toMove, spent) : Deepen<UInt128>(shape, empty, toMove, spent);
+    }
+
+    private (Move, int, int, long) Deepen<T>(BoardShape shape, bool[] empty, Side toMove, Func<bool> spent) where T : unmanaged, IBinaryInteger<T>
+    {
+        int s = toMove == Side.Left ? 0 : 1;
+        var stop = new StopSignal();
+        var search = new BoardSearch<T>(shape, _table!, stop, Options, spent);
+        search.SetPosition(empty);
+        var moves = search.OrderedMoves(s).ToList();
+        if (moves.Count == 0) throw new InvalidOperationException("no move to play");
+        int bestMove = moves[0], bestScore = int.MinValue, depth = 0;
+        for (int d = 0; d < shape.Cells / 2 && !stop.IsSet; d++)
+        {
+            int alpha = -BoardSearch<T>.ProvenWin - 1, iterationBest = -1, iterationScore = int.MinValue;
+            foreach (int m in moves)
+            {
+                var saved = search.Save(s);
+                search.Play(s, m);
+                int v = -search.Score(1 - s, d, -BoardSearch<T>.ProvenWin - 1, -alpha);
+                search.Restore(s, m, saved);
+                if (stop.IsSet) break;
+                if (v > iterationScore)
+                {
+                    iterationScore = v;
+                    iterationBest = m;
+                }
+                if (v > alpha) alpha = v;
+            }
+            if (stop.IsSet) break;
+            (bestMove, bestScore, depth) = (iterationBest, iterationScore, d + 1);
+            // The best move first at the next depth; a proven result needs no deeper look.
+            moves.Remove(bestMove);
+            moves.Insert(0, bestMove);
+            if (Math.Abs(bestScore) >= BoardSearch<T>.ProvenWin - shape.Cells) break;
+        }
+        return (ToMove(shape, s, bestMove), depth, bestScore, search.Nodes);
+    }
+
+    /// <summary>What the running solve is doing (nodes, time, the root move being searched), or null between solves.</summary>
+    public BoardProgress? Current
+    {
+        get
+        {
+            var (nodes, clock, moves, shape) = (_liveNodes, _liveClock, _liveMoves, _shape);
+            if (nodes is null || clock is null || moves is null || shape is null) return null;
+            int k = Math.Clamp(Volatile.Read(ref _liveRoot), 0, moves.Length - 1);
+            return new BoardProgress(nodes(), clock.ElapsedMilliseconds, k, moves.Length, ToMove(shape, _liveSide, moves[k]));
+        }
+    }
+
+    private const string TableMagic = "bramble-board-table/1";
+
+    /// <summary>Writes the board shape and the table, so that a later solve of the same board can resume from it.</summary>
+    public void SaveTable(Stream stream)
+    {
+        if (_shape is null || _table is null) throw new InvalidOperationException("nothing solved yet");
+        using var w = new BinaryWriter(stream, System.Text.Encoding.UTF8, leaveOpen: true);
+        w.Write(TableMagic);
+        w.Write(_shape.Rows);
+        w.Write(_shape.Columns);
+        _table.Save(w);
+    }
+
+    /// <summary>Reads a table written by <see cref="SaveTable"/>; the next solve of a board of that shape starts from it.</summary>
+    public void LoadTable(Stream stream)
+    {
+        using var r = new BinaryReader(stream, System.Text.Encoding.UTF8, leaveOpen: true);
+        string magic = r.ReadString();
+        if (magic != TableMagic) throw new InvalidDataException($"not a saved board table (it starts with '{magic}')");
+        int rows = r.ReadInt32(), columns = r.ReadInt32();
+        var shape = new BoardShape(rows, columns);
+        var table = new OutcomeTable(Options.TableLog2);
+        table.Load(r);
+        (_shape, _table) = (shape, table);
     }
 
     private BoardAnswer Run<T>(BoardShape shape, OutcomeTable table, bool[] empty, Side toMove, Func<bool>? spent)
@@ -86,7 +177,10 @@ public sealed class WholeBoard
         }
         int next = -1, winner = -1, searched = 0;
         var work = new long[rootMoves.Length];
-        long lastReport = 0;
+        _liveNodes = () => searchers.Sum(x => x?.Nodes ?? 0);
+        _liveClock = clock;
+        _liveMoves = rootMoves;
+        _liveSide = s;
 
         void Worker(int t)
         {
@@ -95,11 +189,7 @@ public sealed class WholeBoard
             {
                 int k = Interlocked.Increment(ref next);
                 if (k >= rootMoves.Length) return;
-                if (t == 0 && Progress is { } report && clock.ElapsedMilliseconds - lastReport >= 1000)
-                {
-                    lastReport = clock.ElapsedMilliseconds;
-                    report(new BoardProgress(searchers.Sum(x => x.Nodes), lastReport, k, rootMoves.Length, ToMove(shape, s, rootMoves[k])));
-                }
+                Volatile.Write(ref _liveRoot, k);
                 long before = search.Nodes;
                 var saved = search.Save(s);
                 search.Play(s, rootMoves[k]);
@@ -130,6 +220,7 @@ public sealed class WholeBoard
             }
             foreach (var th in pool) th.Join();
         }
+        _liveNodes = null;
         long nodes = searchers.Sum(x => x.Nodes);
         bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
         if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
