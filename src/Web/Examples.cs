@@ -15,7 +15,7 @@ public static class Examples
         ["hackenbush"] = new("hackenbush", "BRB + G(B,R) + [B0-1,R1-2,G2-0,B1-3]",
             "click an edge to cut it (Left cuts blue or green, Right red or green)", "blue", "red"),
         ["domineering"] = new("domineering", "4x4",
-            "click two neighbouring cells to place a domino (Left vertical, Right horizontal)", "vertical", "horizontal"),
+            "click two neighbouring cells to place a domino (Left vertical, Right horizontal)", "vertical", "horizontal", "domino"),
         ["forms"] = new("forms", "{3|-1} + {5|2||0} + * + 1/2",
             "click an option's line in a term (Left's hang to the left, Right's to the right)", "Left", "Right"),
     };
@@ -32,6 +32,6 @@ public static class Examples
         {
             // A generator that wants other sizes: the person types a position instead.
         }
-        return new RulesetReply(rules.Name, example, "choose a move from the list under the board", "Left", "Right");
+        return new RulesetReply(rules.Name, example, "click a move on the drawing, or choose one from the list under the board", "Left", "Right");
     }
 }

@@ -49,7 +49,8 @@ public static class Codec
 
     private static Parsed<Request> ParseHello(List<Token> tokens)
     {
-        var (words, _) = Sort(tokens);
+        var (words, pairs) = Sort(tokens);
+        if (Twice(pairs) is { } twice) return twice;
         if (words.Count != 3 || words[1].Text != "twine")
             return Error(ErrorCodes.BadRequest, "expected 'hello twine 1'");
         if (!TryNumber(words[2].Text, out var version) || version > int.MaxValue)
@@ -72,7 +73,8 @@ public static class Codec
 
     private static Parsed<Request> ParseApply(List<Token> tokens)
     {
-        var (words, _) = Sort(tokens);
+        var (words, pairs) = Sort(tokens);
+        if (Twice(pairs) is { } twice) return twice;
         if (words.Count != 3) return Error(ErrorCodes.BadRequest, "expected 'apply <side> <move>'");
         if (ParseSide(words[1]) is not { } side) return SideError(words[1]);
         return new Parsed<Request>(new ApplyRequest(side, words[2].Text), null);
@@ -83,7 +85,7 @@ public static class Codec
         var (words, pairs) = Sort(tokens);
         if (words.Count != 2) return Error(ErrorCodes.BadRequest, "expected 'think <side> clock=<ms> inc=<ms>'");
         if (ParseSide(words[1]) is not { } side) return SideError(words[1]);
-        if (Duplicate(pairs) is { } twice) return Error(ErrorCodes.BadRequest, $"column {twice.Column + 1}: key {Quote(twice.Key)} given twice");
+        if (Twice(pairs) is { } twice) return twice;
         long? clock = null, inc = null;
         foreach (var pair in pairs)
         {
@@ -97,7 +99,8 @@ public static class Codec
 
     private static Parsed<Request> Bare(List<Token> tokens, Request request)
     {
-        var (words, _) = Sort(tokens);
+        var (words, pairs) = Sort(tokens);
+        if (Twice(pairs) is { } twice) return twice;
         if (words.Count != 1)
             return Error(ErrorCodes.BadRequest, $"column {words[1].Column + 1}: '{tokens[0].Text}' takes no arguments, got {Quote(words[1].Text)}");
         return new Parsed<Request>(request, null);
@@ -270,6 +273,10 @@ public static class Codec
             if (!seen.Add(pair.Key)) return pair;
         return null;
     }
+
+    /// <summary>A repeated key is a bad request on every request that takes keys (unknown keys included): which one would count is anyone's guess.</summary>
+    private static WireError? Twice(List<Pair> pairs) =>
+        Duplicate(pairs) is { } twice ? Error(ErrorCodes.BadRequest, $"column {twice.Column + 1}: key {Quote(twice.Key)} given twice") : null;
 
     private static string? Value(List<Pair> pairs, string key)
     {

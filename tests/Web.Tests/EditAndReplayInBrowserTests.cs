@@ -48,7 +48,7 @@ public sealed class EditAndReplayInBrowserTests(BrowserFixture browser)
         await page.WaitForSelectorAsync("#edit-analysis[data-done='true'] [data-field='value']");
         var shown = await page.TextContentAsync("#edit-analysis [data-field='value']");
         // The same text through `bramble value`'s own code path.
-        var cli = BigStack.Run(() => ValueVerb.Analyse("hackenbush", text, ascii: false));
+        var cli = BigStack.Run(() => ValueVerb.Analyse("hackenbush", text, ascii: false, new ValueContext()));
         Assert.Equal(cli.Value, shown);
         await page.ClickAsync("#edit-analysis [data-thermo='1']");
         await page.WaitForSelectorAsync("#thermo-body svg");
@@ -75,7 +75,7 @@ public sealed class EditAndReplayInBrowserTests(BrowserFixture browser)
         await page.ClickAsync("#edit-board [data-cell='c2']");
         await page.WaitForFunctionAsync("() => document.querySelector('#edit-text').value === '.../..#'");
         await page.WaitForSelectorAsync("#edit-analysis[data-done='true'] [data-field='value']");
-        var cli = BigStack.Run(() => ValueVerb.Analyse("domineering", ".../..#", ascii: false));
+        var cli = BigStack.Run(() => ValueVerb.Analyse("domineering", ".../..#", ascii: false, new ValueContext()));
         Assert.Equal(cli.Value, await page.TextContentAsync("#edit-analysis [data-field='value']"));
     }
 

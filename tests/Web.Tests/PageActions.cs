@@ -13,8 +13,10 @@ public static class PageActions
     {
         var point = await page.EvaluateAsync<double[]>("""
             sel => {
-              const el = document.querySelector(sel);
-              if (!el) throw new Error('no element ' + sel);
+              const found = document.querySelector(sel);
+              if (!found) throw new Error('no element ' + sel);
+              // A move drawn as a group (stroke plus a wide hit path): aim at its drawn line.
+              const el = found.getTotalLength ? found : (found.querySelector('path, line, polyline, circle') ?? found);
               el.scrollIntoView({ block: 'center', inline: 'center' });
               let x, y;
               if (el.getTotalLength) {
@@ -31,7 +33,7 @@ public static class PageActions
     }
 
     public static string Edge(string view, string move) =>
-        $"#{view}-board [data-move=\"{move}\"], #{view}-board [data-edge=\"{move}\"]";
+        $"#{view}-board [data-move=\"{move}\"]";
 
     /// <summary>Waits until the play board has answered: not busy, with the given number of plies.</summary>
     public static Task WaitPliesAsync(IPage page, int plies) =>

@@ -13,10 +13,14 @@ namespace Bramble.Arena.Engines;
 /// </summary>
 public static class EngineCommand
 {
-    public static EngineLaunch Resolve(PlayerSpec player, string folder, IReadOnlyList<string> self, string? path = null)
+    public static EngineLaunch Resolve(PlayerSpec player, string folder, IReadOnlyList<string> self, string? path = null, string? database = null)
     {
         var program = player.Run[0];
         var rest = player.Run.Skip(1);
+        // A built-in engine shares the match's database unless its run chose one itself.
+        if (database is not null && program == "bramble" && player.Run.Count > 1 && player.Run[1] == "engine"
+            && !player.Run.Any(a => a == "--db" || a.StartsWith("--db=", StringComparison.Ordinal)))
+            rest = rest.Concat(["--db", database]);
         IEnumerable<string> argv;
         if (program == "bramble" && FindOnPath(program, path ?? Environment.GetEnvironmentVariable("PATH")) is null)
             argv = self.Concat(rest);

@@ -19,15 +19,20 @@ public sealed record GameReview(Side? Theory, IReadOnlyList<Blunder> Blunders, i
 /// thread-safe, and keeping it from game to game lets the memo of component values pay off.
 /// A cancel (the match is stopping) ends any analysis in progress at once, as "not known".
 /// </summary>
-public sealed class Analyst(ILogger log, CancellationToken cancel = default)
+/// <param name="newContext">Makes the value contexts (a database may be loaded into them); null: empty ones.</param>
+public sealed class Analyst(ILogger log, CancellationToken cancel = default, Func<ValueContext>? newContext = null)
 {
     private const int StoreLimit = 2_000_000;
-    private ValueContext _context = new();
+    private readonly Func<ValueContext> _newContext = newContext ?? (() => new ValueContext());
+    private ValueContext? _context;
+
+    /// <summary>The context analysis runs in now (its memo holds the component values learnt).</summary>
+    public ValueContext Context => _context ??= _newContext();
     private readonly HashSet<string> _warned = new(StringComparer.Ordinal);
 
     /// <summary>The winner of <paramref name="position"/> with <paramref name="mover"/> to move, or null when not known within the budget.</summary>
     public Side? Winner(IPosition position, Side mover, long budgetMs) =>
-        Budgeted(position, budgetMs, v => _context.Store.OutcomeOf(v).WinnerMovingFirst(mover));
+        Budgeted(position, budgetMs, v => Context.Store.OutcomeOf(v).WinnerMovingFirst(mover));
 
     /// <summary>
     /// For <c>adjudicate: numbers</c>: when every component is a number the sum x is a number, and
@@ -39,7 +44,7 @@ public sealed class Analyst(ILogger log, CancellationToken cancel = default)
         var clock = Stopwatch.StartNew();
         foreach (var component in position.Components())
         {
-            if (Budgeted(component, budgetMs - clock.ElapsedMilliseconds, v => _context.Store.IsNumber(v)) != true) return null;
+            if (Budgeted(component, budgetMs - clock.ElapsedMilliseconds, v => Context.Store.IsNumber(v)) != true) return null;
         }
         return Winner(position, mover, budgetMs - clock.ElapsedMilliseconds);
     }
@@ -81,12 +86,13 @@ public sealed class Analyst(ILogger log, CancellationToken cancel = default)
     private T? Budgeted<T>(IPosition position, long budgetMs, Func<Game, T> read) where T : struct
     {
         if (budgetMs <= 0 || cancel.IsCancellationRequested) return null;
-        if (_context.Store.Count > StoreLimit) _context = new ValueContext();
-        _context.Cancellation = cancel;
-        _context.ResetCounters(budgetMs);
+        if (_context is { } old && old.Store.Count > StoreLimit) _context = null;
+        var context = Context;
+        context.Cancellation = cancel;
+        context.ResetCounters(budgetMs);
         try
         {
-            return read(position.Ruleset.Value(position, _context));
+            return read(position.Ruleset.Value(position, context));
         }
         catch (BudgetExceededException)
         {
@@ -102,7 +108,7 @@ public sealed class Analyst(ILogger log, CancellationToken cancel = default)
         }
         finally
         {
-            _context.EndBudget();
+            context.EndBudget();
         }
     }
 }

@@ -28,7 +28,7 @@ public static class DrawVerb
                 {
                     var store = new GameStore();
                     var g = store.Parse(text);
-                    return ThermographPicture.Draw(store.Thermograph(g), store.Format(g));
+                    return ThermographPicture.Draw(store.Thermograph(g), store.Format(g), text);
                 }
                 var rules = Rulesets.Find(kind) ?? throw new InputException(
                     $"unknown ruleset '{kind}'; known: {string.Join(", ", Rulesets.All.Select(r => r.Name).Append("thermograph"))}");

@@ -46,6 +46,8 @@ public static class EngineVerb
                     return context;
                 },
                 Log = Log.Logger,
+                // End of input while thinking (the harness died, even by kill -9) ends the engine within a second.
+                ForceExit = Environment.Exit,
             };
             using var stdin = Console.OpenStandardInput();
             using var stdout = Console.OpenStandardOutput();

@@ -63,8 +63,12 @@ internal sealed class NotationReader
             ReadPart();
             SkipSpace();
             if (AtEnd) return;
-            // A letter here is most likely a mistyped colour: say so, as the other places do.
-            if (Current != '+') throw Error(_pos, char.IsLetter(Current) ? "a colour B, R or G" : "'+' or the end of the text");
+            // A letter that is no colour is most likely a mistyped one: say so, as the other
+            // places do. A real colour here follows a closed branch list, where no stalk goes on.
+            if (Current != '+')
+                throw Error(_pos, char.IsLetter(Current) && !EdgeColourExtensions.TryParse(Current, out _)
+                    ? "a colour B, R or G"
+                    : "'+' or the end of the text");
             _pos++;
             SkipSpace();
             if (AtEnd) throw Error(_pos, "another part after '+': a stalk such as BRG or a graph such as [B0-1]");

@@ -140,19 +140,27 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         return -1;
     }
 
-    /// <summary>Move counts of side s: its most disjoint moves now (an upper bound on the moves it can still make) and its safe moves.</summary>
-    public (int Possible, int Safe) Counts(int s)
+    /// <summary>
+    /// Move counts of side s: Possible, its most disjoint moves now (an upper bound on the moves it
+    /// can still make); Safe, disjoint moves the opponent can never take away; Spare, further
+    /// moves disjoint from those safe ones and from each other (each opponent move can spoil at
+    /// most two of them).
+    /// </summary>
+    public (int Possible, int Safe, int Spare) Counts(int s)
     {
         int h = _shape.Height[s], w = _shape.Width[s];
         uint rm = _rowMask[s];
         T b = _board[s];
-        int possible = 0, safe = 0;
-        uint usedP = 0, usedS = 0;
-        uint prev = uint.CreateTruncating(b) & rm;
-        uint prevSafe = prev & ~(prev >> 1) & ~(prev << 1);
+        Span<uint> rows = stackalloc uint[h];
+        Span<uint> safeUsed = stackalloc uint[h];
+        for (int r = 0; r < h; r++) rows[r] = uint.CreateTruncating(b >> (r * w)) & rm;
+        int possible = 0, safe = 0, spare = 0;
+        uint usedP = 0, usedS = 0, usedX = 0;
+        uint prevSafe = rows[0] & ~(rows[0] >> 1) & ~(rows[0] << 1);
+        safeUsed[0] = 0;
         for (int r = 1; r < h; r++)
         {
-            uint cur = uint.CreateTruncating(b >> (r * w)) & rm;
+            uint prev = rows[r - 1], cur = rows[r];
             // A cell is protected when neither horizontal neighbour is empty: the opponent can never cover it.
             uint curSafe = cur & ~(cur >> 1) & ~(cur << 1);
             // Greedy from the top pairs each run of a column into ⌊length/2⌋ dominoes, the most there are.
@@ -162,11 +170,26 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             uint u = prevSafe & ~usedS & curSafe;
             safe += BitOperations.PopCount(u);
             usedS = u;
-            prev = cur;
+            safeUsed[r - 1] |= u;
+            safeUsed[r] = u;
             prevSafe = curSafe;
         }
-        return (possible, safe);
+        for (int r = 1; r < h; r++)
+        {
+            uint x = rows[r - 1] & ~safeUsed[r - 1] & ~usedX & rows[r] & ~safeUsed[r];
+            spare += BitOperations.PopCount(x);
+            usedX = x;
+        }
+        return (possible, safe, spare);
     }
+
+    /// <summary>
+    /// Moves side s is sure to make however the opponent plays: its safe moves, and of its spare
+    /// moves one in three when it moves first (it plays one, the opponent spoils at most two, and
+    /// so on) or, moving second, one in three of those the opponent's first move leaves.
+    /// </summary>
+    private static int Guaranteed(int safe, int spare, bool movesFirst) =>
+        safe + (movesFirst ? (spare + 2) / 3 : (Math.Max(0, spare - 2) + 2) / 3);
 
     private ulong Key(int s, out int mirror)
     {
@@ -195,12 +218,12 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         if ((me & (me >> w)) == T.Zero) return false;
         if (_options.SafeMoveBounds)
         {
-            var (possible, safe) = Counts(s);
-            var (oppPossible, oppSafe) = Counts(1 - s);
-            // Playing only safe moves, the mover outlasts every move the opponent can still make.
-            if (safe > oppPossible) return true;
-            // The opponent answers each of the mover's possible moves with a safe move of its own.
-            if (oppSafe >= possible) return false;
+            var (possible, safe, spare) = Counts(s);
+            var (oppPossible, oppSafe, oppSpare) = Counts(1 - s);
+            // The mover's sure moves outlast every move the opponent can still make.
+            if (Guaranteed(safe, spare, movesFirst: true) > oppPossible) return true;
+            // The opponent answers each of the mover's possible moves with one of its sure moves.
+            if (Guaranteed(oppSafe, oppSpare, movesFirst: false) >= possible) return false;
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;
@@ -208,6 +231,23 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         long start = Nodes;
         Span<int> moves = stackalloc int[_shape.Cells];
         int n = Generate(s, ply, moves);
+        if (_options.ChildLookup)
+        {
+            var d = _shape.HashDelta[s];
+            int o = (1 - s) * 4;
+            for (int k = 0; k < n; k++)
+            {
+                int i = moves[k], at = i * 8 + o;
+                ulong child = _hash[o] ^ d[at];
+                if (_options.Symmetry)
+                    for (int f = 1; f < 4; f++) child = Math.Min(child, _hash[o + f] ^ d[at + f]);
+                if (_table.TryGet(child, out bool replyWins, out _) && !replyWins)
+                {
+                    _table.Store(key, true, _shape.MirrorMove[s][mirror][i], 1);
+                    return true;
+                }
+            }
+        }
         int stubborn = -1;
         long stubbornWork = -1;
         T other = _board[1 - s];
@@ -276,7 +316,20 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             {
                 int oppTaken = Bit(oppPairs, i).AsInt() + Bit(oppPairs, i - 1).AsInt() + Bit(oppPairs, j).AsInt() + Bit(oppPairs, j - 1).AsInt();
                 int ownSpent = Bit(tops, i - w).AsInt() + Bit(tops, j).AsInt();
-                score = (2 * oppTaken - ownSpent + 8) << 21;
+                int gain = 2 * oppTaken - ownSpent;
+                if (_options.EvaluationOrdering)
+                {
+                    // The position the move leaves, by the same counts as the bounds.
+                    T ownBefore = _board[s], otherBefore = _board[1 - s];
+                    _board[s] &= _clearOwn[s][i];
+                    _board[1 - s] &= _clearOther[s][i];
+                    var (p1, s1, _) = Counts(s);
+                    var (p2, s2, _) = Counts(1 - s);
+                    _board[s] = ownBefore;
+                    _board[1 - s] = otherBefore;
+                    gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gain;
+                }
+                score = (Math.Clamp(gain, -250, 250) + 256) << 21;
                 if (safe) score = 0;
             }
             if (_options.KillersAndHistory)

@@ -20,6 +20,18 @@ public sealed record BoardSearchOptions
     /// <summary>Order moves by the opponent's moves they take away and the own moves they spend; safe moves last.</summary>
     public bool CountOrdering { get; init; } = true;
 
+    /// <summary>
+    /// Order moves by the counts after the move (own possible and safe moves against the
+    /// opponent's), as the evaluation of the position it leaves; costs two counts per move.
+    /// </summary>
+    public bool EvaluationOrdering { get; init; } = true;
+
+    /// <summary>
+    /// Before searching any move, look each child up in the table: one already known lost for
+    /// the opponent wins at once (enhanced transposition cutoff, common practice in chess programs).
+    /// </summary>
+    public bool ChildLookup { get; init; } = true;
+
     /// <summary>Two killer moves per ply and a history count per move (common practice).</summary>
     public bool KillersAndHistory { get; init; } = true;
 

@@ -9,7 +9,11 @@ public sealed record SetupReply(
     IReadOnlyList<ChoiceReply> Levels,
     IReadOnlyList<ChoiceReply> Engines);
 
-public sealed record RulesetReply(string Name, string Example, string MoveHint, string LeftIs, string RightIs);
+/// <summary>
+/// How the page turns clicks into moves for a ruleset: <c>point</c> (click the element carrying the
+/// move's name) or <c>domino</c> (click two neighbouring cells).
+/// </summary>
+public sealed record RulesetReply(string Name, string Example, string MoveHint, string LeftIs, string RightIs, string Pick = "point");
 
 public sealed record ChoiceReply(string Name, string Words);
 

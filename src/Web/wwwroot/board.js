@@ -18,26 +18,29 @@ export function show(container, board) {
   }
 }
 
-/** The move an element of the picture stands for (data-move, or the older data-edge of Hackenbush). */
+/** The move an element of the picture stands for: the nearest data-move around it. */
 export function moveOf(element) {
-  const hit = element.closest('[data-move], [data-edge]');
-  if (!hit) return null;
-  return hit.dataset.move ?? hit.dataset.edge;
+  return element.closest('[data-move]')?.dataset.move ?? null;
 }
 
 const cellParts = name => ({ col: name.charCodeAt(0) - 97, row: parseInt(name.slice(1), 10) });
 const cellName = (col, row) => String.fromCharCode(97 + col) + row;
 
 /**
- * Listens for moves made by pointing. onMove(text) is called with a move name; onProblem(text)
- * with a reason when two picked cells make no domino for the side to move.
+ * Listens for moves made by pointing. pick() says how the current ruleset picks moves: 'point'
+ * (the clicked element names its move) or 'domino' (two neighbouring cells). onMove(text) is
+ * called with a move name; onProblem(text) with a reason when two cells make no domino for the
+ * side to move.
  */
-export function listen(container, { side, onMove, onProblem, onPick }) {
+export function listen(container, { side, pick, onMove, onProblem, onPick }) {
   let picked = null;
   const clear = () => { picked?.classList.remove('picked'); picked = null; };
   container.onclick = event => {
-    const move = moveOf(event.target);
-    if (move) { clear(); onMove(move, event.target); return; }
+    if (pick() !== 'domino') {
+      const move = moveOf(event.target);
+      if (move) onMove(move, event.target);
+      return;
+    }
     const cell = event.target.closest('[data-cell]');
     if (!cell) return;
     if (picked === cell) { clear(); return; }
@@ -58,8 +61,6 @@ export function listen(container, { side, onMove, onProblem, onPick }) {
 export function mark(container, moves, cls = 'hinted') {
   container.querySelectorAll('.' + cls).forEach(e => e.classList.remove(cls));
   for (const move of moves) {
-    const found = container.querySelectorAll(`[data-move="${CSS.escape(move)}"], [data-edge="${CSS.escape(move)}"]`);
-    found.forEach(e => e.classList.add(cls));
-    if (found.length === 0) container.querySelectorAll(`[data-cell="${CSS.escape(move)}"]`).forEach(e => e.classList.add(cls));
+    container.querySelectorAll(`[data-move="${CSS.escape(move)}"]`).forEach(e => e.classList.add(cls));
   }
 }

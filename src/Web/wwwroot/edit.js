@@ -81,7 +81,7 @@ export class EditView {
       $('edit-error').textContent = '';
       $('edit-caret').hidden = true;
       show($('edit-board'), b);
-      if (this.selected !== null) $('edit-board').querySelectorAll(`[data-move="e${this.selected + 1}"], [data-edge="e${this.selected + 1}"]`).forEach(x => x.classList.add('chosen'));
+      if (this.selected !== null) $('edit-board').querySelectorAll(`[data-move="e${this.selected + 1}"]`).forEach(x => x.classList.add('chosen'));
       this.analysis.run(game);
     } catch (e) {
       this.fail(e);
@@ -96,7 +96,7 @@ export class EditView {
       this.selected = Number(move.slice(1)) - 1;
       this.tools();
       $('edit-board').querySelectorAll('.chosen').forEach(x => x.classList.remove('chosen'));
-      $('edit-board').querySelectorAll(`[data-move="${move}"], [data-edge="${move}"]`).forEach(x => x.classList.add('chosen'));
+      $('edit-board').querySelectorAll(`[data-move="${move}"]`).forEach(x => x.classList.add('chosen'));
       const c = this.analysis.componentOf(move);
       $('edit-help').textContent = c ? `Edge ${move} is in component ${c.index} (${c.exact ? c.value : 'no exact value'}); its thermograph is one click away in the table.` : '';
       return;

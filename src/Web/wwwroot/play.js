@@ -28,6 +28,7 @@ export class PlayView {
     $('play-stop').onclick = () => this.#slot.cancel();
     listen($('play-board'), {
       side: () => this.board?.to_move,
+      pick: () => this.ruleset(this.board?.ruleset).pick,
       onMove: move => this.move(move),
       onProblem: text => this.error(text),
       onPick: cell => this.error(''),

@@ -59,7 +59,7 @@ public sealed class NotationTests
 
     [Theory]
     [InlineData("", 0, "a stalk such as BRG")]
-    [InlineData("BX", 1, "'+' or the end")]
+    [InlineData("BX", 1, "a colour B, R or G")]
     [InlineData("B +", 3, "another part after '+'")]
     [InlineData("B + + R", 4, "a stalk (B, R or G) or a graph")]
     [InlineData("G(B,R", 5, "',' or ')'")]
