@@ -10,7 +10,7 @@ namespace Bramble.Rules.Clobber;
 /// position is all-small, so every value has an atomic weight. Groups of stones are independent;
 /// each is searched once for its eight images and their colour swaps (negatives).
 /// </summary>
-public sealed class ClobberRuleset : IRuleset, IComponentCatalogue
+public sealed class ClobberRuleset : IRuleset, IComponentCatalogue, IComposable
 {
     public string Name => "clobber";
 
@@ -53,4 +53,18 @@ public sealed class ClobberRuleset : IRuleset, IComponentCatalogue
             }
         }
     }
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    public int ListingLimit => 12;
+
+    public int DefaultSearchSize => 8;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => ClobberComposition.ComponentsOfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) => ClobberComposition.SumOf(this, components);
+
+    public int LeastSize(Game target, GameStore store) => ClobberComposition.LeastSize(target, store);
+
+    public TargetFacts Facts(Game target, GameStore store) => ClobberComposition.Facts(target, store);
 }

@@ -12,7 +12,7 @@ internal sealed class SampledComposable(IRuleset ruleset) : IComposable
 {
     private const int PerGenerator = 200;
 
-    public string SizeUnit => "size";
+    public string SizeUnit => (ruleset as Database.IComponentCatalogue)?.SizeUnit ?? "units";
 
     public int ListingLimit => 12;
 
@@ -28,9 +28,11 @@ internal sealed class SampledComposable(IRuleset ruleset) : IComposable
             {
                 texts = ruleset.Generate(generator, PerGenerator, size, seed: size);
             }
-            catch (ArgumentException)
+            catch (Exception e) when (e is not BudgetExceededException and not OutOfMemoryException)
             {
-                continue; // this generator does not make positions of that size
+                // A generator that cannot make positions of this size (some reject it, some fail
+                // outright on tiny sizes) only leaves this sample smaller.
+                continue;
             }
             foreach (var text in texts)
                 foreach (var part in ruleset.Parse(text).Components())

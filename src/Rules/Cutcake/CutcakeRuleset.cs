@@ -9,7 +9,7 @@ namespace Bramble.Rules.Cutcake;
 /// player with no piece to cut loses. Every position is an integer. Pieces are independent
 /// components; a piece and its transpose are searched once between them.
 /// </summary>
-public sealed class CutcakeRuleset : IRuleset, IComponentCatalogue
+public sealed class CutcakeRuleset : IRuleset, IComponentCatalogue, IComposable
 {
     public string Name => "cutcake";
 
@@ -39,4 +39,20 @@ public sealed class CutcakeRuleset : IRuleset, IComponentCatalogue
             for (int rows = 1; rows * rows <= area; rows++)
                 if (area % rows == 0) yield return Parse($"{rows}x{area / rows}");
     }
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    public int ListingLimit => 64;
+
+    public int DefaultSearchSize => 16;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => CutcakeComposition.ComponentsOfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) => CutcakeComposition.SumOf(this, components);
+
+    public int LeastSize(Game target, GameStore store) => CutcakeComposition.LeastSize(target, store);
+
+    public IEnumerable<IPosition> Construct(Game target, GameStore store) => CutcakeComposition.Construct(this, target, store);
+
+    public TargetFacts Facts(Game target, GameStore store) => CutcakeComposition.Facts(target, store);
 }
