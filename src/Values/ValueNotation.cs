@@ -496,6 +496,13 @@ public static class ValueNotation
 
     // ------------------------------------------------------------------ out
 
+    /// <summary>
+    /// Longest bar run written: an option that would need more bars is written in braces instead
+    /// (<c>{0|{0||||0|||0||0|0}}</c>), so a deep form's text grows linearly with its depth
+    /// rather than with its square.
+    /// </summary>
+    public const int MaxBars = 4;
+
     /// <summary>Longest written form printed in full; larger values are written with shared parts.</summary>
     public const int PlainLimit = 4000;
 
@@ -594,7 +601,11 @@ public static class ValueNotation
 
         private (string Text, int Bars) Side(IReadOnlyList<Game> options)
         {
-            if (options.Count == 1 && nameOf(options[0]) is null) return Part(options[0]);
+            if (options.Count == 1 && nameOf(options[0]) is null)
+            {
+                var (text, bars) = Part(options[0]);
+                return bars < MaxBars ? (text, bars) : ("{" + text + "}", 0);
+            }
             return (string.Join(",", options.Select(o => nameOf(o) ?? Whole(o))), 0);
         }
     }
@@ -614,34 +625,100 @@ public static class ValueNotation
     }
 }
 
-/// <summary>Writes value expressions back as text, as written (no simplification).</summary>
+/// <summary>
+/// Writes value expressions back as text, as written (no simplification), into one buffer, so
+/// the work is linear in the length of the text however deep the expression nests.
+/// </summary>
 public static class ValueExprWriter
 {
-    public static string Write(ValueExpr expr, bool ascii = false) => expr switch
+    public static string Write(ValueExpr expr, bool ascii = false)
     {
-        NumberExpr n => n.Value.ToString(),
-        UpStarExpr u => WriteUpStar(u, ascii),
-        SwitchExpr s => (ascii ? "+-" : "±") + s.X,
-        OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
-        SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
-        PartExpr p => "#" + p.Name,
-        SharedExpr s => "(" + Write(s.Body, ascii) + " where " + string.Join("; ", s.Parts.OrderBy(kv => kv.Key).Select(kv => $"#{kv.Key} = {Write(kv.Value, ascii)}")) + ")",
-        NegateExpr n => n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u && (u.X.IsZero || u.Ups == 0)) ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
-        _ => throw new ArgumentException($"unknown expression {expr}"),
-    };
-
-    private static string WriteInside(OptionsExpr o, bool ascii)
-    {
-        var (l, lb) = Side(o.Left, ascii);
-        var (r, rb) = Side(o.Right, ascii);
-        return l + new string('|', Math.Max(lb, rb) + 1) + r;
+        var sb = new StringBuilder();
+        new Writing(sb, ascii).Write(expr);
+        return sb.ToString();
     }
 
-    private static int Bars(OptionsExpr o) =>
-        Math.Max(o.Left is [OptionsExpr a] ? Bars(a) : 0, o.Right is [OptionsExpr b] ? Bars(b) : 0) + 1;
+    private sealed class Writing(StringBuilder sb, bool ascii)
+    {
+        // Bar counts of brace expressions, worked out once each (by reference: equal records may
+        // stand in different places).
+        private readonly Dictionary<OptionsExpr, int> _bars = new(ReferenceEqualityComparer.Instance);
 
-    private static (string, int) Side(IReadOnlyList<ValueExpr> options, bool ascii) =>
-        options is [OptionsExpr only] ? (WriteInside(only, ascii), Bars(only)) : (string.Join(",", options.Select(x => Write(x, ascii))), 0);
+        public void Write(ValueExpr expr)
+        {
+            switch (expr)
+            {
+                case NumberExpr n: sb.Append(n.Value.ToString()); break;
+                case UpStarExpr u: sb.Append(WriteUpStar(u, ascii)); break;
+                case SwitchExpr s: sb.Append(ascii ? "+-" : "±").Append(s.X.ToString()); break;
+                case OptionsExpr o: sb.Append('{'); Inside(o); sb.Append('}'); break;
+                case SumExpr s:
+                    for (int i = 0; i < s.Terms.Count; i++)
+                    {
+                        if (i > 0) sb.Append(" + ");
+                        if (s.Terms[i] is SumExpr) { sb.Append('('); Write(s.Terms[i]); sb.Append(')'); }
+                        else Write(s.Terms[i]);
+                    }
+                    break;
+                case PartExpr p: sb.Append('#').Append(p.Name); break;
+                case SharedExpr s:
+                    sb.Append('(');
+                    Write(s.Body);
+                    sb.Append(" where ");
+                    bool first = true;
+                    foreach (var kv in s.Parts.OrderBy(kv => kv.Key))
+                    {
+                        if (!first) sb.Append("; ");
+                        first = false;
+                        sb.Append('#').Append(kv.Key).Append(" = ");
+                        Write(kv.Value);
+                    }
+                    sb.Append(')');
+                    break;
+                case NegateExpr n:
+                    bool bare = n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u2 && (u2.X.IsZero || u2.Ups == 0));
+                    sb.Append(bare ? "-" : "-(");
+                    Write(n.Inner);
+                    if (!bare) sb.Append(')');
+                    break;
+                default: throw new ArgumentException($"unknown expression {expr}");
+            }
+        }
+
+        /// <summary>The bars between o's sides: one more than the longest run written inside a side without braces.</summary>
+        private int Bars(OptionsExpr o)
+        {
+            if (_bars.TryGetValue(o, out int known)) return known;
+            int bars = Math.Max(SideBars(o.Left), SideBars(o.Right)) + 1;
+            _bars[o] = bars;
+            return bars;
+        }
+
+        /// <summary>The bar run a side brings: a lone brace option is written without braces while its run stays under <see cref="ValueNotation.MaxBars"/>.</summary>
+        private int SideBars(IReadOnlyList<ValueExpr> side) =>
+            side is [OptionsExpr only] && Bars(only) is var b && b < ValueNotation.MaxBars ? b : 0;
+
+        private void Inside(OptionsExpr o)
+        {
+            Side(o.Left);
+            sb.Append('|', Bars(o));
+            Side(o.Right);
+        }
+
+        private void Side(IReadOnlyList<ValueExpr> options)
+        {
+            if (options is [OptionsExpr only] && Bars(only) < ValueNotation.MaxBars)
+            {
+                Inside(only);
+                return;
+            }
+            for (int i = 0; i < options.Count; i++)
+            {
+                if (i > 0) sb.Append(',');
+                Write(options[i]);
+            }
+        }
+    }
 
     private static string WriteUpStar(UpStarExpr u, bool ascii)
     {

@@ -168,3 +168,53 @@ public class HostileNotationTests
     /// <summary>Runs on a 256 KiB stack, far below the default, so deep recursion shows as a crash.</summary>
     internal static T OnSmallStack<T>(Func<T> work) => BigStack.Run(work, 256 * 1024);
 }
+
+/// <summary>Writing deep expressions back: linear in the depth, and read back to the same expression.</summary>
+public class DeepWritingTests
+{
+    [Fact]
+    public void ADeepFormIsWrittenInTextLinearInItsDepth()
+    {
+        int n = ValueNotation.MaxDepth;
+        string text = string.Concat(Enumerable.Repeat("{0|", n)) + "0" + new string('}', n);
+        var expr = ValueNotation.Parse(text);
+        string written = ValueExprWriter.Write(expr);
+        // With unbounded bar runs the text would hold 1 + 2 + … + n bars; braces every few levels keep it near 4n.
+        Assert.True(written.Length <= 5 * n, $"{written.Length} characters for depth {n}");
+        Assert.Equal(written, ValueExprWriter.Write(ValueNotation.Parse(written)));
+        Assert.Equal(expr, ValueNotation.Parse(written), new StructuralComparer());
+    }
+
+    [Fact]
+    public void ShortBarRunsStayAsTheyWere()
+    {
+        Assert.Equal("{4|2||-2|-4}", ValueExprWriter.Write(ValueNotation.Parse("{{4|2}|{-2|-4}}")));
+        Assert.Equal("{0||||0|||0||0|0}", ValueExprWriter.Write(ValueNotation.Parse("{0|{0|{0|{0|0}}}}")));
+        Assert.Equal("{0|{0||||0|||0||0|0}}", ValueExprWriter.Write(ValueNotation.Parse("{0|{0|{0|{0|{0|0}}}}}")));
+    }
+
+    /// <summary>Compares expression trees by shape and contents, without recursion on their depth.</summary>
+    private sealed class StructuralComparer : IEqualityComparer<ValueExpr>
+    {
+        public bool Equals(ValueExpr? a, ValueExpr? b)
+        {
+            var pending = new Stack<(ValueExpr?, ValueExpr?)>([(a, b)]);
+            while (pending.Count > 0)
+            {
+                var (x, y) = pending.Pop();
+                if (x is OptionsExpr ox && y is OptionsExpr oy)
+                {
+                    if (ox.Left.Count != oy.Left.Count || ox.Right.Count != oy.Right.Count) return false;
+                    for (int i = 0; i < ox.Left.Count; i++) pending.Push((ox.Left[i], oy.Left[i]));
+                    for (int i = 0; i < ox.Right.Count; i++) pending.Push((ox.Right[i], oy.Right[i]));
+                }
+                else if (x is OptionsExpr || y is OptionsExpr || !Equals2(x, y)) return false;
+            }
+            return true;
+        }
+
+        private static bool Equals2(ValueExpr? x, ValueExpr? y) => EqualityComparer<ValueExpr>.Default.Equals(x, y);
+
+        public int GetHashCode(ValueExpr obj) => 0;
+    }
+}

@@ -13,7 +13,7 @@ public sealed class ApiTests(BoardServer board) : IClassFixture<BoardServer>
         var (status, a) = await board.Post("/api/analyse", new { ruleset = "hackenbush", start = "BRB + BR", first = "left" });
         Assert.Equal(200, status);
         Assert.True((bool)a["exact"]!);
-        // Sign expansion: BRB = 3/4, BR = 1/2 (CHECKS.md §2, Winning Ways vol. 1 ch. 2; worked values derived from the definitions).
+        // Sign expansion: BRB = 3/4, BR = 1/2 (Winning Ways vol. 1 ch. 2; worked values derived from the definitions).
         Assert.Equal("5/4", (string?)a["value"]);
         Assert.Equal("L", (string?)a["outcome"]);
         Assert.Equal("left", (string?)a["left_first_wins"]);
@@ -26,7 +26,7 @@ public sealed class ApiTests(BoardServer board) : IClassFixture<BoardServer>
     public async Task TwoByTwoDomineeringIsAFirstPlayerWin()
     {
         var (_, a) = await board.Post("/api/analyse", new { ruleset = "domineering", start = "2x2", first = "left" });
-        // The 2×2 square is ±1, a first-player win (Lachmann, Moore, Rapaport, More Games of No Chance, 2002; CHECKS.md §8).
+        // The 2×2 square is ±1, a first-player win (Lachmann, Moore, Rapaport, More Games of No Chance, 2002).
         Assert.Equal("±1", (string?)a["value"]);
         Assert.Equal("N", (string?)a["outcome"]);
         Assert.Equal("left", (string?)a["left_first_wins"]);
@@ -74,7 +74,7 @@ public sealed class ApiTests(BoardServer board) : IClassFixture<BoardServer>
         var start = "GGG + GGGG + GGGGG";
         var (_, h) = await board.Post("/api/hint", new { ruleset = "hackenbush", start, first = "left", moves = Array.Empty<string>() });
         // 3 ⊕ 4 ⊕ 5 = 2: the only winning move cuts the 3-stalk down to 1 edge, i.e. its second edge e2
-        // (Ferguson, Game Theory, Part I §6; CHECKS.md §3; the move derived from the definitions).
+        // (Ferguson, Game Theory, Part I §6; the move derived from the definitions).
         Assert.Equal(["e2"], h["winning"]!.AsArray().Select(m => (string)m!).ToArray());
     }
 
@@ -83,7 +83,7 @@ public sealed class ApiTests(BoardServer board) : IClassFixture<BoardServer>
     {
         var (status, t) = await board.Post("/api/thermograph", new { ruleset = "domineering", position = "../../.." });
         Assert.Equal(200, status);
-        // 3 rows by 2 columns is {1/2|-2}: mean -3/4, temperature 5/4 (Wikipedia, "Domineering"; CHECKS.md §8, transposed).
+        // 3 rows by 2 columns is {1/2|-2}: mean -3/4, temperature 5/4 (Wikipedia, "Domineering", transposed).
         Assert.Equal("5/4", (string?)t["temperature"]);
         Assert.Equal("-3/4", (string?)t["mean"]);
         Assert.Contains("<svg", (string)t["svg"]!);
@@ -107,7 +107,7 @@ public sealed class ApiTests(BoardServer board) : IClassFixture<BoardServer>
         var (_, r) = await board.Post("/api/replay", new { ruleset = "hackenbush", start = "BRB", first = "left", moves = new[] { "e3", "e2" } });
         var plies = r["plies"]!.AsArray();
         Assert.Equal(3, plies.Count);
-        // BRB = 3/4, then BR = 1/2, then B = 1 (sign expansion, CHECKS.md §2, derived from the definitions).
+        // BRB = 3/4, then BR = 1/2, then B = 1 (sign expansion, derived from the definitions).
         Assert.Equal(["3/4", "1/2", "1"], plies.Select(p => (string)p!["value"]!).ToArray());
     }
 

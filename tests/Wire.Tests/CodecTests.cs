@@ -105,7 +105,7 @@ public class CodecTests
     [InlineData("think left clock= inc=0", "bad-request")]
     [InlineData("think left clock=99999999999999999999 inc=0", "bad-request")]
     [InlineData("think left clock=1 clock=2", "bad-request")]
-    // SPEC.md §4 and docs/protocol.md: a repeated key is a bad request on every request, not only think.
+    // docs/protocol.md: a repeated key is a bad request on every request, not only think.
     [InlineData("assess depth=1 depth=2", "bad-request")]
     [InlineData("hello twine 1 style=a style=b", "bad-request")]
     [InlineData("halt why=a why=a", "bad-request")]

@@ -1,6 +1,6 @@
 namespace Bramble.Arena.Spec;
 
-/// <summary>A loaded, checked match specification (SPEC.md §5). Paths are absolute.</summary>
+/// <summary>A loaded, checked match specification (docs/matches.md). Paths are absolute.</summary>
 public sealed record MatchSpec
 {
     public required string Title { get; init; }

@@ -59,13 +59,13 @@ public sealed class NotationTests
 
     [Theory]
     [InlineData("", 0, "a stalk such as BRG")]
-    [InlineData("BX", 1, "a colour B, R or G")]
+    [InlineData("BX", 1, "a colour B, R or G")] // a letter where a colour could stand is named as such
     [InlineData("B +", 3, "another part after '+'")]
     [InlineData("B + + R", 4, "a stalk (B, R or G) or a graph")]
     [InlineData("G(B,R", 5, "',' or ')'")]
     [InlineData("G(B,)", 4, "a colour B, R or G")]
     [InlineData("G()", 2, "a colour B, R or G")]
-    [InlineData("G(B)R", 4, "'+' or the end")]
+    [InlineData("G(B)R", 4, "a colour B, R or G")]
     [InlineData("[]", 1, "an edge such as B0-1")]
     [InlineData("[B0 1]", 4, "'-' between the two nodes")]
     [InlineData("[B0-]", 4, "a node number")]
