@@ -65,7 +65,7 @@ public sealed class NotationTests
     [InlineData("G(B,R", 5, "',' or ')'")]
     [InlineData("G(B,)", 4, "a colour B, R or G")]
     [InlineData("G()", 2, "a colour B, R or G")]
-    [InlineData("G(B)R", 4, "a colour B, R or G")]
+    [InlineData("G(B)R", 4, "'+' or the end")] // a colour cannot follow a closed branch list
     [InlineData("[]", 1, "an edge such as B0-1")]
     [InlineData("[B0 1]", 4, "'-' between the two nodes")]
     [InlineData("[B0-]", 4, "a node number")]
