@@ -51,7 +51,7 @@ public sealed record StartPosition(string Ruleset, string Text, string Source);
 
 public enum TournamentFormat { RoundRobin, Gauntlet }
 
-/// <summary>How each pair meets on each position (SPEC.md §5 <c>seats</c>).</summary>
+/// <summary>How each pair meets on each position (<c>seats</c> in docs/matches.md).</summary>
 public enum SeatPlan
 {
     /// <summary>Each player as Left and as Right, each side moving first: four games.</summary>

@@ -46,7 +46,7 @@ public static class StoneGenerators
             // The traditional opening: Left removes a stone from a corner or the centre, Right an adjacent one.
             int r = random.Next(2) == 0 ? 0 : size / 2, c = r == 0 ? 0 : size / 2;
             cells[r, c] = '.';
-            if (c + 1 < size) cells[r, c + 1] = '.'; else cells[r + 1, c] = '.';
+            cells[r, c + 1 < size ? c + 1 : c - 1] = '.'; // size ≥ 2, so one neighbour in the row exists
         }
         return Join(cells, size, size);
     }
