@@ -588,12 +588,15 @@ public sealed partial class GameStore
         if (g == Zero) return true;
         if (IsNumber(g)) return false;
         if (_tag[g.Id] is { } t) return t.X.IsZero;
+        // Memoised: game trees share subgames, and an unmemoised walk visits every path.
+        if (_allSmall.TryGetValue(g.Id, out bool known)) return known;
         var l = LeftIds(g.Id);
         var r = RightIds(g.Id);
-        if (l.Length == 0 || r.Length == 0) return false;
-        foreach (int o in l) if (!IsAllSmall(new Game(o))) return false;
-        foreach (int o in r) if (!IsAllSmall(new Game(o))) return false;
-        return true;
+        bool result = l.Length > 0 && r.Length > 0;
+        foreach (int o in l) result = result && IsAllSmall(new Game(o));
+        foreach (int o in r) result = result && IsAllSmall(new Game(o));
+        _allSmall[g.Id] = result;
+        return result;
     }
 
     /// <summary>Smaller than every positive number and larger than every negative one (0 included).</summary>
