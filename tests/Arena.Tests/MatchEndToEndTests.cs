@@ -103,7 +103,7 @@ public class MatchEndToEndTests
             ruleset = "heaps",
             positions = new { file = "suites/garden.txt" },
             players,
-            format = "gauntlet",
+            format = "challenger",
             focus = "steady",
             seats = "swap",
             // Short enough that the stuck engines lose on time soon, long enough for the others on a busy machine.
@@ -215,14 +215,14 @@ public class MatchEndToEndTests
             players = new[] { Player("pruner", "--pick", "perfect"), Player("random", "--seed", "9") },
             seats = "swap",
             parallel = 2,
-            sprt = new { elo0 = 0, elo1 = 100, alpha = 0.05, beta = 0.05 },
+            sprt = new { null_elo = 0, alternative_elo = 100, alpha = 0.05, beta = 0.05 },
             analysis_ms = 0,
             journal = "j.jsonl",
         });
         var report = await RunAsync(spec);
         Assert.Equal(MatchStop.SprtDecided, report.Stop);
         Assert.True(report.Records.Count < report.Total);
-        Assert.Equal(SprtDecision.AcceptH1, report.Standings.Sprt!.Decision);
+        Assert.Equal(SprtDecision.Alternative, report.Standings.Sprt!.Decision);
         // The decision rests on what the journal holds: recomputing from the file gives the same.
         var again = MatchStandings.Compute(JournalFile.Read(report.JournalPath).Records, ["pruner", "random"], report.Spec.Sprt);
         Assert.Equal(report.Standings.Sprt.Llr, again.Sprt!.Llr, 12);

@@ -97,7 +97,7 @@ public class StandingsTests
             if (decided) decidedAt = i;
         }
         Assert.NotNull(decidedAt);
-        Assert.Equal(SprtDecision.AcceptH1, MatchStandings.Compute(records, ["a", "b"], spec).Sprt!.Decision);
+        Assert.Equal(SprtDecision.Alternative, MatchStandings.Compute(records, ["a", "b"], spec).Sprt!.Decision);
     }
 
     [Fact]

@@ -69,13 +69,13 @@ public sealed record MatchStandings(IReadOnlyList<PlayerStanding> Players, int G
         if (between.Count > 0)
         {
             var counts = between.Aggregate(new PentanomialCounts(), (c, p) => c.Add(p.First.ScoreOf(candidate) + p.Second.ScoreOf(candidate)));
-            var llr = Statistics.Sprt.LlrPentanomial(counts, spec.Elo0, spec.Elo1);
+            var llr = Statistics.Sprt.LlrPentanomial(counts, spec.NullElo, spec.AlternativeElo);
             if (!double.IsNaN(llr))
                 return new SprtResult(spec, candidate, baseline, llr, bounds, bounds.Decide(llr), ScoreModel.Pentanomial, counts.Pairs);
         }
         var games = records.Where(r => r.Pair.Contains(candidate) && r.Pair.Contains(baseline)).ToList();
         var wins = games.Count(g => g.WinnerId == candidate);
-        var single = Statistics.Sprt.LlrBernoulli(wins, games.Count - wins, spec.Elo0, spec.Elo1);
+        var single = Statistics.Sprt.LlrBernoulli(wins, games.Count - wins, spec.NullElo, spec.AlternativeElo);
         return new SprtResult(spec, candidate, baseline, single, bounds, bounds.Decide(single), ScoreModel.Trinomial, games.Count);
     }
 }

@@ -46,8 +46,8 @@ public static class StandingsJson
                 json.WriteStartObject("sprt");
                 json.WriteString("candidate", sprt.Candidate);
                 json.WriteString("baseline", sprt.Baseline);
-                json.WriteNumber("elo0", sprt.Spec.Elo0);
-                json.WriteNumber("elo1", sprt.Spec.Elo1);
+                json.WriteNumber("null_elo", sprt.Spec.NullElo);
+                json.WriteNumber("alternative_elo", sprt.Spec.AlternativeElo);
                 json.WriteNumber("alpha", sprt.Spec.Alpha);
                 json.WriteNumber("beta", sprt.Spec.Beta);
                 Finite(json, "llr", sprt.Llr);
@@ -55,8 +55,8 @@ public static class StandingsJson
                 json.WriteNumber("upper", Math.Round(sprt.Bounds.Upper, 6));
                 json.WriteString("decision", sprt.Decision switch
                 {
-                    SprtDecision.AcceptH0 => "H0",
-                    SprtDecision.AcceptH1 => "H1",
+                    SprtDecision.Null => "null",
+                    SprtDecision.Alternative => "alternative",
                     _ => "continue",
                 });
                 json.WriteString("model", sprt.Model.Word());

@@ -46,7 +46,7 @@ public static class StandingsText
         {
             text.AppendLine();
             text.AppendLine(string.Create(s_c,
-                $"SPRT (Wald 1945) of {sprt.Candidate} against {sprt.Baseline}, H0: {sprt.Spec.Elo0:0.#} Elo, H1: {sprt.Spec.Elo1:0.#} Elo, alpha {sprt.Spec.Alpha}, beta {sprt.Spec.Beta}:"));
+                $"SPRT (Wald 1945) of {sprt.Candidate} against {sprt.Baseline}, null hypothesis {sprt.Spec.NullElo:0.#} Elo, alternative {sprt.Spec.AlternativeElo:0.#} Elo, alpha {sprt.Spec.Alpha}, beta {sprt.Spec.Beta}:"));
             text.AppendLine(string.Create(s_c,
                 $"  LLR {sprt.Llr:0.000} (bounds {sprt.Bounds.Lower:0.000} … {sprt.Bounds.Upper:0.000}, {sprt.Samples} {(sprt.Model == ScoreModel.Pentanomial ? "pairs" : "games")}): {sprt.DecisionText}"));
         }
