@@ -220,6 +220,7 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
                         GameEnd.Crash, $"{game.PlayerOf(side)}: the engine could not be restarted: {e.Message}", [rules.Parse(game.Position.Text)]);
                     return await ToRecordAsync(game, result, analyst).ConfigureAwait(false);
                 }
+                if (spec.Seed is { } seed) await SeedAsync(game, seed, [left, right], cancel).ConfigureAwait(false);
                 result = await referee.PlayAsync(game, rules, left, right, spec.Clock, spec.Adjudicate, spec.AdjudicateMs, analyst, cancel).ConfigureAwait(false);
                 cancel.ThrowIfCancellationRequested();
                 return await ToRecordAsync(game, result, analyst).ConfigureAwait(false);
@@ -236,6 +237,27 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
                         if (!engine.IsUsable) await engine.Client.RecoverAsync(options.Timeouts.Recover).ConfigureAwait(false);
                         await pool.ReturnAsync(engine).ConfigureAwait(false);
                     }
+                }
+            }
+        }
+
+        /// <summary>
+        /// <c>set seed</c> for this game to both engines. An engine that refuses it has no chance in
+        /// it to seed (or no such setting) and plays on; one that fails otherwise fails again at
+        /// <c>begin</c>, where the referee turns it into a forfeit.
+        /// </summary>
+        private async Task SeedAsync(ScheduledGame game, long matchSeed, Engine[] engines, CancellationToken cancel)
+        {
+            foreach (var engine in engines)
+            {
+                var seed = GameSeed.For(matchSeed, game.Id, engine.PlayerId);
+                try
+                {
+                    await engine.Client.SetAsync("seed", seed.ToString(System.Globalization.CultureInfo.InvariantCulture), options.Timeouts.Reply, cancel).ConfigureAwait(false);
+                }
+                catch (EngineFailureException e)
+                {
+                    options.Log.Debug("Game {Game}: {Player} did not take seed {Seed}: {Error}", game.Id, engine.PlayerId, seed, e.Message);
                 }
             }
         }

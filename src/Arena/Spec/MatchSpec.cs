@@ -33,6 +33,12 @@ public sealed record MatchSpec
 
     public required string JournalPath { get; init; }
 
+    /// <summary>
+    /// When set, every player is sent <c>set seed</c> before each game, with a seed made from this one,
+    /// the game's id and the player's id (<see cref="Schedule.GameSeed"/>); null sends none.
+    /// </summary>
+    public long? Seed { get; init; }
+
     /// <summary>Budget of the exact analysis behind <c>theory</c> and <c>blunders</c>, per game; 0 turns it off.</summary>
     public int AnalysisMs { get; init; } = 1000;
 

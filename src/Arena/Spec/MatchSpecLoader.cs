@@ -14,7 +14,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
     private static readonly string[] s_topKeys =
     [
         "title", "ruleset", "positions", "players", "format", "focus", "seats", "clock", "parallel",
-        "adjudicate", "sprt", "journal", "analysis_ms", "adjudicate_ms",
+        "adjudicate", "sprt", "journal", "analysis_ms", "adjudicate_ms", "seed",
     ];
 
     // Spellings of earlier versions, answered with the current one rather than "unknown".
@@ -123,6 +123,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             var journal = OptionalString(root, "journal", "$") ?? Path.Combine("results", Path.GetFileNameWithoutExtension(specPath) + ".jsonl");
             var analysisMs = OptionalInteger(root, "analysis_ms", "$", min: 0, max: 3_600_000) ?? 1000;
             var adjudicateMs = OptionalInteger(root, "adjudicate_ms", "$", min: 1, max: 3_600_000) ?? 100;
+            var seed = OptionalInteger(root, "seed", "$", long.MinValue, long.MaxValue);
 
             if (Errors.Count > 0) return null;
             return new MatchSpec
@@ -142,6 +143,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
                 JournalPath = Path.GetFullPath(Path.Combine(folder, journal)),
                 AnalysisMs = (int)analysisMs,
                 AdjudicateMs = (int)adjudicateMs,
+                Seed = seed,
             };
         }
 
