@@ -74,6 +74,10 @@ public static class MatchVerb
         try
         {
             spec = new MatchSpecLoader(RulesetFinders.Registry).Load(specPath!);
+            // The demo that travels with an installed program writes its journal where the user
+            // is, not into the program's folder.
+            if (demo && !FoundFromWorkingFolder(specPath!))
+                spec = spec with { JournalPath = Path.GetFullPath(Path.Combine("results", "demo.jsonl")) };
         }
         catch (MatchSpecException e)
         {
@@ -236,6 +240,14 @@ public static class MatchVerb
         var title = $"merge of {journals.Length} journal{(journals.Length == 1 ? "" : "s")}";
         Console.Out.Write(json ? StandingsJson.Write(standings, title, notices) + "\n" : StandingsText.Table(standings, title));
         return Entry.Success;
+    }
+
+    /// <summary>True when the demo file sits in matches/ of the working folder or of one above it (a checkout).</summary>
+    private static bool FoundFromWorkingFolder(string demoPath)
+    {
+        var root = Path.GetDirectoryName(Path.GetDirectoryName(Path.GetFullPath(demoPath)))!;
+        var here = Path.GetFullPath(Directory.GetCurrentDirectory());
+        return here == root || here.StartsWith(root.TrimEnd(Path.DirectorySeparatorChar) + Path.DirectorySeparatorChar, StringComparison.Ordinal);
     }
 
     /// <summary>matches/demo.json from the working folder upward, then from the program's folder upward (a fresh checkout).</summary>
