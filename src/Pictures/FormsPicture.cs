@@ -25,6 +25,7 @@ public static class FormsPicture
         public List<Node> Children { get; } = new();
         public double X;
         public int Depth;
+        public int Option; // 1-based index among its parent's options for the same side
     }
 
     public static string Svg(FormsPosition position)
@@ -53,8 +54,11 @@ public static class FormsPicture
         {
             var (number, root, from, to) = placed[i];
             var (rx, _) = P(root);
-            svg.Text(rx, margin, $"term {number}", "title");
-            Draw(svg, root, P);
+            using (svg.Group("term", ("data-term", number)))
+            {
+                svg.Text(rx, margin, $"term {number}", "title");
+                Draw(svg, root, P, number);
+            }
             if (i + 1 < placed.Count) svg.Text(margin + (to + 0.1) * unitX, margin + 36, "+", "plus");
         }
         if (placed.Count == 0) svg.Text(width / 2, height / 2, "0 (no terms left)");
@@ -68,11 +72,19 @@ public static class FormsPicture
         budget--;
         if (depth >= MaxDepth) { if (term.HasMoves) node.Children.Add(new Node("…", null) { Depth = depth + 1 }); return node; }
         foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            int j = 0;
             foreach (var o in term.Options(side))
             {
-                if (budget <= 0) { node.Children.Add(new Node("…", side) { Depth = depth + 1 }); break; }
-                node.Children.Add(Build(o, side, depth + 1, ref budget));
+                j++;
+                // A term's own options are the moves a player clicks, so they are always drawn;
+                // only deeper levels are cut when the node budget runs out.
+                if (budget <= 0 && depth > 0) { node.Children.Add(new Node("…", side) { Depth = depth + 1 }); break; }
+                var child = Build(o, side, depth + 1, ref budget);
+                child.Option = j;
+                node.Children.Add(child);
             }
+        }
         return node;
     }
 
@@ -85,14 +97,25 @@ public static class FormsPicture
 
     private static int Depth(Node n) => n.Children.Count == 0 ? n.Depth : n.Children.Max(Depth);
 
-    private static void Draw(Svg svg, Node n, Func<Node, (double X, double Y)> at)
+    /// <summary>
+    /// Draws a node and what hangs below it. The term's own options (<paramref name="term"/> given)
+    /// are wrapped in a group with <c>data-move="k.j"</c> and <c>data-side</c>, with a wide
+    /// invisible hit line, so a web page can offer them as moves.
+    /// </summary>
+    private static void Draw(Svg svg, Node n, Func<Node, (double X, double Y)> at, int? term = null)
     {
         var (x, y) = at(n);
         foreach (var c in n.Children)
         {
             var (cx, cy) = at(c);
-            svg.Add("line", c.Via switch { Side.Left => "left", Side.Right => "right", _ => "more" }, ("x1", x), ("y1", y), ("x2", cx), ("y2", cy), ("data-side", c.Via?.Word() ?? "more"));
+            string cls = c.Via switch { Side.Left => "left", Side.Right => "right", _ => "more" };
+            IDisposable? group = term is { } k && c.Via is { } side && c.Option > 0
+                ? svg.Group("option", ("data-move", $"{k}.{c.Option}"), ("data-side", side.Word()))
+                : null;
+            svg.Add("line", cls, ("x1", x), ("y1", y), ("x2", cx), ("y2", cy), ("data-side", c.Via?.Word() ?? "more"));
+            if (group is not null) svg.HitPath($"M {Bramble.Pictures.Svg.Num(x)} {Bramble.Pictures.Svg.Num(y)} L {Bramble.Pictures.Svg.Num(cx)} {Bramble.Pictures.Svg.Num(cy)}");
             Draw(svg, c, at);
+            group?.Dispose();
         }
         svg.Add("circle", "node", ("cx", x), ("cy", y), ("r", 3));
         svg.Text(x, y - 8, n.Label);

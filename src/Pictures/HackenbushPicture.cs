@@ -7,65 +7,88 @@ namespace Bramble.Pictures;
 /// <summary>Hackenbush positions as an SVG drawing on a ground line, and as text for the terminal.</summary>
 public static class HackenbushPicture
 {
+    // Colour is never the only cue: blue is solid, red dashed, green dotted, and every label
+    // carries the colour's letter, so a reader who cannot tell red from green can still play.
     private const string Style =
-        "text{font-family:sans-serif;font-size:11px;fill:#222;paint-order:stroke;stroke:white;stroke-width:3px}" +
-        ".ground{stroke:#6b4f2a;stroke-width:5}.node{fill:#333}" +
-        ".blue{stroke:#1f5fbf;stroke-width:4;fill:none}.red{stroke:#c0392b;stroke-width:4;fill:none}" +
-        ".green{stroke:#27ae60;stroke-width:4;fill:none}";
+        "text{font-family:sans-serif;font-size:11px;fill:#222}" +
+        ".ground{stroke:#6b4f2a;stroke-width:5}.node{fill:#333}.foot{fill:#6b4f2a}" +
+        ".blue{stroke:#1f5fbf;stroke-width:4;fill:none}" +
+        ".red{stroke:#c0392b;stroke-width:4;fill:none;stroke-dasharray:9,5}" +
+        ".green{stroke:#1e8449;stroke-width:5;fill:none;stroke-dasharray:0.1,7;stroke-linecap:round}" +
+        ".letter-blue{fill:#1f5fbf;font-weight:bold}.letter-red{fill:#c0392b;font-weight:bold}.letter-green{fill:#1e8449;font-weight:bold}" +
+        ".legend{font-size:11px;fill:#444}";
+
+    /// <summary>Width and height assumed for one character of an edge label (11px sans-serif, generous).</summary>
+    public const double LabelCharWidth = 7, LabelHeight = 13;
+
+    private const double Unit = 64, Margin = 24, LegendBand = 30, LegendWidth = 430;
 
     public static string Svg(HackenbushPosition position)
     {
         var layout = new HackenbushLayout(position);
-        const double unit = 56, margin = 30;
-        double width = layout.Width * unit + 2 * margin, height = (layout.Height + 0.8) * unit + 2 * margin;
-        double groundY = height - margin;
-        (double, double) P(double x, double y) => (margin + x * unit, groundY - y * unit);
+        // World coordinates: x to the right, the ground at y = 0, height upward as negative y.
+        Point NodeAt(int n) => new(layout.Nodes[n].X * Unit, -layout.Nodes[n].Y * Unit);
+        var feet = layout.Feet.ToDictionary(f => f.Key, f => new Point(f.Value * Unit, 0));
+        var vertices = layout.Nodes.Keys.Where(n => n != 0).Select(NodeAt).Concat(feet.Values.Distinct()).ToList();
+        var router = new EdgeRouter(vertices, 0);
+        var curves = new Dictionary<int, Curve>();
+        // Straight edges first (they usually fit as they are), then the ones that must bend.
+        foreach (var e in layout.Edges.OrderBy(e => e.From == e.To ? 1 : 0).ThenBy(e => e.Id.Value))
+        {
+            var a = e.From == 0 ? feet[e.Id.Value] : NodeAt(e.From);
+            var b = e.To == 0 ? feet[e.Id.Value] : NodeAt(e.To);
+            curves[e.Id.Value] = router.Route(a, b);
+        }
+        var labels = new Dictionary<int, Box>();
+        foreach (var e in layout.Edges)
+            labels[e.Id.Value] = router.PlaceLabel(curves[e.Id.Value], LabelText(e).Length * LabelCharWidth, LabelHeight);
+
+        // Frame everything drawn, then shift it so the picture starts at the margin.
+        var all = curves.Values.SelectMany(c => c.Samples(24)).Concat(vertices)
+            .Concat(labels.Values.SelectMany(b => new[] { new Point(b.Left, b.Top), new Point(b.Right, b.Bottom) }))
+            .Append(new Point(0, 0)).ToList();
+        double minX = all.Min(p => p.X), maxX = all.Max(p => p.X), minY = all.Min(p => p.Y), maxY = Math.Max(0, all.Max(p => p.Y));
+        var shift = new Point(Margin - minX, LegendBand + Margin - minY);
+        double width = Math.Max(LegendWidth, maxX - minX + 2 * Margin), height = LegendBand + maxY - minY + 2 * Margin;
+        double groundY = shift.Y;
+
         var svg = new Svg(width, height);
-        svg.Line(margin / 2, groundY, width - margin / 2, groundY, "ground");
-        // Parallel edges between the same two nodes bend apart so each stays visible.
-        var seenPairs = new Dictionary<(int, int), int>();
+        Legend(svg);
+        svg.Line(Margin / 2, groundY, width - Margin / 2, groundY, "ground");
+        var pieceOf = PieceOfEdge(position);
         foreach (var e in layout.Edges)
         {
-            string cls = e.Colour switch { EdgeColour.Blue => "blue", EdgeColour.Red => "red", _ => "green" };
-            (double X, double Y) a, b;
-            if (e.From == 0 && e.To == 0)
-            {
-                var (fx, fy) = P(layout.Feet[e.Id.Value], 0);
-                a = (fx, fy); b = a;
-            }
-            else
-            {
-                a = e.From == 0 ? P(layout.Feet[e.Id.Value], 0) : P(layout.Nodes[e.From].X, layout.Nodes[e.From].Y);
-                b = e.To == 0 ? P(layout.Feet[e.Id.Value], 0) : P(layout.Nodes[e.To].X, layout.Nodes[e.To].Y);
-            }
-            (double X, double Y) label;
-            if (e.IsLoop)
-            {
-                // A loop is a small circle above its node.
-                double r = 14;
-                svg.Add("circle", cls, ("cx", a.X), ("cy", a.Y - r), ("r", r), ("data-edge", e.Id.ToString()));
-                label = (a.X, a.Y - 2 * r - 4);
-            }
-            else
-            {
-                var pair = (Math.Min(e.From, e.To), Math.Max(e.From, e.To));
-                int k = seenPairs.TryGetValue(pair, out var v) ? v : 0;
-                seenPairs[pair] = k + 1;
-                double bend = k == 0 || e.From == 0 || e.To == 0 ? 0 : (k % 2 == 1 ? 1 : -1) * 18 * ((k + 1) / 2);
-                double mx = (a.X + b.X) / 2, my = (a.Y + b.Y) / 2;
-                double dx = b.X - a.X, dy = b.Y - a.Y, len = Math.Max(1, Math.Sqrt(dx * dx + dy * dy));
-                double cx = mx - dy / len * bend * 2, cy = my + dx / len * bend * 2;
-                svg.Add("path", cls, ("d", $"M {Bramble.Pictures.Svg.Num(a.X)} {Bramble.Pictures.Svg.Num(a.Y)} Q {Bramble.Pictures.Svg.Num(cx)} {Bramble.Pictures.Svg.Num(cy)} {Bramble.Pictures.Svg.Num(b.X)} {Bramble.Pictures.Svg.Num(b.Y)}"), ("data-edge", e.Id.ToString()));
-                label = (0.25 * a.X + 0.5 * cx + 0.25 * b.X + 10, 0.25 * a.Y + 0.5 * cy + 0.25 * b.Y);
-            }
-            svg.Text(label.X, label.Y + 4, e.Id.ToString(), null, "start");
+            string colour = ColourWord(e.Colour);
+            var c = curves[e.Id.Value];
+            var moved = new Curve(c.Start + shift, c.Control1 + shift, c.Control2 + shift, c.End + shift);
+            using var group = svg.Group("edge", ("data-move", e.Id.ToString()), ("data-edge", e.Id.Value), ("data-component", pieceOf[e.Id.Value]), ("data-colour", colour));
+            string d = moved.PathData();
+            svg.Add("path", colour, ("d", d));
+            svg.HitPath(d);
+            var box = labels[e.Id.Value];
+            svg.Label(box.Left + shift.X, box.Bottom + shift.Y - 3, e.Id.ToString() + " ", e.Colour.Letter().ToString(), "label", "letter-" + colour);
         }
-        foreach (var (node, (x, y)) in layout.Nodes)
+        foreach (var f in feet.Values.Distinct()) svg.Add("circle", "foot", ("cx", f.X + shift.X), ("cy", f.Y + shift.Y), ("r", 3.0));
+        foreach (var n in layout.Nodes.Keys.Where(n => n != 0))
         {
-            var (px, py) = P(x, y);
-            svg.Add("circle", "node", ("cx", px), ("cy", py), ("r", 3.5));
+            var p = NodeAt(n) + shift;
+            svg.Add("circle", "node", ("cx", p.X), ("cy", p.Y), ("r", 3.5));
         }
         return svg.Render(Style, "Hackenbush " + position.Text);
+    }
+
+    private static string LabelText(HackenbushEdge e) => $"{e.Id} {e.Colour.Letter()}";
+
+    private static void Legend(Svg svg)
+    {
+        double x = Margin, y = 18;
+        foreach (var (cls, letter, words) in new[] { ("blue", 'B', "blue: Left cuts"), ("red", 'R', "red: Right cuts"), ("green", 'G', "green: either") })
+        {
+            svg.Add("path", cls, ("d", $"M {Bramble.Pictures.Svg.Num(x)} {Bramble.Pictures.Svg.Num(y - 4)} L {Bramble.Pictures.Svg.Num(x + 26)} {Bramble.Pictures.Svg.Num(y - 4)}"));
+            svg.Text(x + 31, y, letter.ToString(), "letter-" + cls, "start");
+            svg.Text(x + 42, y, words, "legend", "start");
+            x += 40 + (words.Length + 2) * 6.2;
+        }
     }
 
     /// <summary>Each piece as an upright outline (trees and stalks read bottom-up), then the edge table.</summary>
@@ -93,6 +116,18 @@ public static class HackenbushPicture
         }
         return sb.ToString().TrimEnd();
     }
+
+    /// <summary>The 1-based piece number (as in <see cref="HackenbushPosition.Components"/>) of every edge id.</summary>
+    private static Dictionary<int, int> PieceOfEdge(HackenbushPosition position)
+    {
+        var map = new Dictionary<int, int>();
+        var parts = position.Components();
+        for (int i = 0; i < parts.Count; i++)
+            foreach (var e in ((HackenbushPosition)parts[i]).Edges) map[e.Id.Value] = i + 1;
+        return map;
+    }
+
+    private static string ColourWord(EdgeColour c) => c switch { EdgeColour.Blue => "blue", EdgeColour.Red => "red", _ => "green" };
 
     private static double Height(HackenbushLayout layout, int node) => node == 0 ? 0 : layout.Nodes[node].Y;
 

@@ -10,12 +10,57 @@ public sealed class Svg(double width, double height)
     private static readonly XNamespace Ns = "http://www.w3.org/2000/svg";
     private readonly List<XElement> _items = new();
 
+    // Elements go into the innermost open group, else to the top level (see Group).
+    private readonly Stack<XElement> _open = new();
+
     public static string Num(double v) => Math.Round(v, 2).ToString(CultureInfo.InvariantCulture);
 
-    public void Add(string name, string? cssClass, params (string Key, object Value)[] attributes) => _items.Add(Element(name, cssClass, null, attributes));
+    public void Add(string name, string? cssClass, params (string Key, object Value)[] attributes) => Put(Element(name, cssClass, null, attributes));
 
     public void Text(double x, double y, string text, string? cssClass = null, string anchor = "middle") =>
-        _items.Add(Element("text", cssClass, text, [("x", x), ("y", y), ("text-anchor", anchor)]));
+        Put(Element("text", cssClass, text, [("x", x), ("y", y), ("text-anchor", anchor)]));
+
+    /// <summary>Text in two parts, the second in its own style (a coloured letter after an edge label).</summary>
+    public void Label(double x, double y, string first, string second, string? cssClass, string secondClass)
+    {
+        var t = Element("text", cssClass, null, [("x", x), ("y", y), ("text-anchor", "start")]);
+        t.Add(new XText(first));
+        t.Add(Element("tspan", secondClass, second, []));
+        Put(t);
+    }
+
+    /// <summary>
+    /// Opens a &lt;g&gt; carrying the given attributes (the data-* names a web page reads); every
+    /// element added until the returned handle is disposed goes inside it.
+    /// </summary>
+    public IDisposable Group(string? cssClass, params (string Key, object Value)[] attributes)
+    {
+        var g = Element("g", cssClass, null, attributes);
+        Put(g);
+        _open.Push(g);
+        return new Closer(this, g);
+    }
+
+    /// <summary>
+    /// A wide invisible copy of a stroke that catches pointer events, so a thin edge is easy to
+    /// click on a web page without drawing anything twice.
+    /// </summary>
+    public void HitPath(string d) =>
+        Add("path", "hit", ("d", d), ("fill", "none"), ("stroke", "transparent"), ("stroke-width", 14.0), ("pointer-events", "stroke"));
+
+    private void Put(XElement e)
+    {
+        if (_open.Count > 0) _open.Peek().Add(e);
+        else _items.Add(e);
+    }
+
+    private sealed class Closer(Svg owner, XElement group) : IDisposable
+    {
+        public void Dispose()
+        {
+            if (owner._open.Count > 0 && owner._open.Peek() == group) owner._open.Pop();
+        }
+    }
 
     public void Line(double x1, double y1, double x2, double y2, string? cssClass = null) =>
         Add("line", cssClass, ("x1", x1), ("y1", y1), ("x2", x2), ("y2", y2));

@@ -1,6 +1,6 @@
 namespace Bramble.Search;
 
-/// <summary>Creates players by their SPEC.md names.</summary>
+/// <summary>Creates players by their names (docs/players.md).</summary>
 public static class Players
 {
     public static readonly IReadOnlyList<string> Names = ["perfect", "alphabeta", "hotstrat", "thermostrat", "sentestrat", "random"];

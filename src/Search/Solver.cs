@@ -8,7 +8,7 @@ namespace Bramble.Search;
 /// <param name="Move">A winning first move for <paramref name="First"/> when it wins, else null.</param>
 public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact);
 
-/// <summary>What <c>bramble solve</c> reports (SPEC.md §7).</summary>
+/// <summary>What <c>bramble solve</c> reports (docs/cli.md).</summary>
 /// <param name="Outcome">The outcome class, when both sides were solved exactly.</param>
 public sealed record SolveReport(Outcome? Outcome, SolveAnswer? LeftFirst, SolveAnswer? RightFirst, long Nodes, long ElapsedMs, string Strategy, bool Exact);
 

@@ -157,9 +157,13 @@ public class MatchSpecLoaderTests
           "positions": { "file": "s.txt" },
           "players": [ { "id": "a", "run": ["a"] }, { "id": "b", "run": ["b"], "settings": { "strategy": "hotstrat", "depth": 3 } }, ],
           "sprt": { "null_elo": 0, "alternative_elo": 20 },
+          "seed": -3,
+          "analysis_nodes": 5000,
         }
         """);
         var spec = s_loader.Load(path);
+        Assert.Equal(-3, spec.Seed);
+        Assert.Equal(5000, spec.AnalysisNodes);
         Assert.Equal([new("strategy", "hotstrat"), new("depth", "3")], spec.Players[1].Settings);
         Assert.Equal(new SprtSpec(0, 20, 0.05, 0.05), spec.Sprt);
     }

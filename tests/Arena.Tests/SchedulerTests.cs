@@ -45,7 +45,7 @@ public class SchedulerTests
     public void AllFourSeatsEachPlayerOnEachSideWithEachSideFirst()
     {
         var schedule = Scheduler.Build(Spec(2, 1, SeatPlan.AllFour));
-        // SPEC.md §5: each player as Left and as Right, each side moving first.
+        // docs/matches.md: each player as Left and as Right, each side moving first.
         Assert.Equal(4, schedule.Select(g => (g.Left, g.First)).Distinct().Count());
         Assert.All(schedule, g => Assert.NotEqual(g.Left, g.Right));
     }
@@ -56,7 +56,7 @@ public class SchedulerTests
         var schedule = Scheduler.Build(Spec(2, 4, SeatPlan.Swap));
         foreach (var pair in schedule.Chunk(2))
         {
-            // SPEC.md §5: two games, seats swapped, same side first.
+            // docs/matches.md: two games, seats swapped, same side first.
             Assert.Equal(pair[0].Left, pair[1].Right);
             Assert.Equal(pair[0].First, pair[1].First);
             Assert.Equal(pair[0].Position, pair[1].Position);

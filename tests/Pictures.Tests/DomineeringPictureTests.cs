@@ -17,7 +17,7 @@ public class DomineeringPictureTests
         var doc = XDocument.Parse(PositionPicture.Draw(position));
         var rects = doc.Descendants(Ns + "rect").Where(r => r.Attribute("data-cell") is not null).ToList();
         Assert.Equal(cells, rects.Count);
-        Assert.Equal(filled, rects.Count(r => (string?)r.Attribute("class") == "filled"));
+        Assert.Equal(filled, rects.Count(r => (string?)r.Attribute("data-hole") == "1"));
         Assert.Equal(cells, rects.Select(r => (string)r.Attribute("data-cell")!).Distinct().Count());
     }
 

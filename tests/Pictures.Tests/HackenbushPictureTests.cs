@@ -19,10 +19,14 @@ public class HackenbushPictureTests
         var doc = XDocument.Parse(PositionPicture.Draw(position));
         var marks = doc.Descendants().Where(e => e.Attribute("data-edge") is not null).ToList();
         Assert.Equal(edges, marks.Count);
-        var ids = marks.Select(m => (string)m.Attribute("data-edge")!).ToHashSet();
+        var ids = marks.Select(m => (string)m.Attribute("data-move")!).ToHashSet();
         Assert.Equal(position.Edges.Select(e => e.Id.ToString()).ToHashSet(), ids);
-        var labels = doc.Descendants(Ns + "text").Select(t => t.Value).ToHashSet();
+        // Each label is the edge id followed by its colour letter, e.g. "e3 R".
+        var labels = doc.Descendants(Ns + "text").Select(t => t.Value.Split(' ')[0]).ToHashSet();
         Assert.Superset(ids, labels);
+        var letters = doc.Descendants(Ns + "g").Where(g => g.Attribute("data-edge") is not null)
+            .Select(g => g.Element(Ns + "text")!.Value).ToList();
+        Assert.Equal(position.Edges.Select(e => $"{e.Id} {e.Colour.Letter()}"), letters);
     }
 
     [Fact]
@@ -30,7 +34,7 @@ public class HackenbushPictureTests
     {
         var position = (HackenbushPosition)Rulesets.Get("hackenbush").Parse("BRG");
         var doc = XDocument.Parse(PositionPicture.Draw(position));
-        var classes = doc.Descendants().Where(e => e.Attribute("data-edge") is not null).Select(e => (string)e.Attribute("class")!).ToList();
+        var classes = doc.Descendants().Where(e => e.Attribute("data-edge") is not null).Select(e => (string)e.Attribute("data-colour")!).ToList();
         Assert.Equal(["blue", "red", "green"], classes);
     }
 

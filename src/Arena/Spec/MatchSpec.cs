@@ -42,6 +42,12 @@ public sealed record MatchSpec
     /// <summary>Budget of the exact analysis behind <c>theory</c> and <c>blunders</c>, per game; 0 turns it off.</summary>
     public int AnalysisMs { get; init; } = 1000;
 
+    /// <summary>
+    /// When set, the analysis behind <c>theory</c> and <c>blunders</c> is limited to this many nodes
+    /// per game (in a fresh value context) instead of <see cref="AnalysisMs"/>: the same on every run.
+    /// </summary>
+    public long? AnalysisNodes { get; init; }
+
     /// <summary>Budget of each adjudication check.</summary>
     public int AdjudicateMs { get; init; } = 100;
 
@@ -57,7 +63,7 @@ public sealed record StartPosition(string Ruleset, string Text, string Source);
 
 public enum TournamentFormat { RoundRobin, Challenger }
 
-/// <summary>How each pair meets on each position (SPEC.md §5 <c>seats</c>).</summary>
+/// <summary>How each pair meets on each position (<c>seats</c> in docs/matches.md).</summary>
 public enum SeatPlan
 {
     /// <summary>Each player as Left and as Right, each side moving first: four games.</summary>

@@ -4,7 +4,7 @@ using Bramble.Rules;
 namespace Bramble.Arena.Spec;
 
 /// <summary>
-/// Reads a match spec (SPEC.md §5) and checks all of it before anything runs: every problem is
+/// Reads a match spec (docs/matches.md) and checks all of it before anything runs: every problem is
 /// collected with its JSON path and reported together in one <see cref="MatchSpecException"/>, so
 /// a user fixes a file in one go rather than one error per run. Positions are parsed with their
 /// ruleset here, so a typing mistake in line 90 of a suite stops the match before game 1.
@@ -14,7 +14,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
     private static readonly string[] s_topKeys =
     [
         "title", "ruleset", "positions", "players", "format", "focus", "seats", "clock", "parallel",
-        "adjudicate", "sprt", "journal", "analysis_ms", "adjudicate_ms", "seed",
+        "adjudicate", "sprt", "journal", "analysis_ms", "adjudicate_ms", "seed", "analysis_nodes",
     ];
 
     // Spellings of earlier versions, answered with the current one rather than "unknown".
@@ -41,7 +41,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
         string text;
         try
         {
-            text = File.ReadAllText(full);
+            text = BoundedFile.ReadText(full, BoundedFile.SpecBytes);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -124,6 +124,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             var analysisMs = OptionalInteger(root, "analysis_ms", "$", min: 0, max: 3_600_000) ?? 1000;
             var adjudicateMs = OptionalInteger(root, "adjudicate_ms", "$", min: 1, max: 3_600_000) ?? 100;
             var seed = OptionalInteger(root, "seed", "$", long.MinValue, long.MaxValue);
+            var analysisNodes = OptionalInteger(root, "analysis_nodes", "$", min: 1, max: 1_000_000_000_000);
 
             if (Errors.Count > 0) return null;
             return new MatchSpec
@@ -144,6 +145,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
                 AnalysisMs = (int)analysisMs,
                 AdjudicateMs = (int)adjudicateMs,
                 Seed = seed,
+                AnalysisNodes = analysisNodes,
             };
         }
 
@@ -297,6 +299,9 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             else Generated(source, path, ruleset, positions);
         }
 
+        /// <summary>Errors listed for one suite file before the rest of it is skipped.</summary>
+        private const int MaxSuiteErrors = 5;
+
         private void SuiteFile(JsonElement source, string path, string? ruleset, List<StartPosition> positions)
         {
             foreach (var key in new[] { "count", "size", "seed", "colours" })
@@ -307,7 +312,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             string text;
             try
             {
-                text = File.ReadAllText(full);
+                text = BoundedFile.ReadText(full, BoundedFile.SuiteBytes);
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
@@ -316,8 +321,17 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             }
             var lines = SuiteLine.Split(text);
             if (lines.Count == 0) Error(path + ".file", $"'{file}' holds no positions");
+            var before = Errors.Count;
             foreach (var line in lines)
             {
+                // A file that is not a suite at all (a path typed wrong, or a match file from someone
+                // else pointing at a private file) would otherwise be echoed line by line.
+                if (Errors.Count - before >= MaxSuiteErrors)
+                {
+                    var failing = lines.Count(l => l.Number >= line.Number);
+                    Error(path + ".file", $"'{file}': {failing} more line{(failing == 1 ? "" : "s")} not checked; is it a position suite?");
+                    break;
+                }
                 var where = $"{file} line {line.Number}";
                 var name = line.Ruleset ?? ruleset;
                 if (name is null)
@@ -526,7 +540,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
         private string UnknownRuleset(string name)
         {
             var known = Rulesets.All.Select(r => r.Name).ToList();
-            return $"unknown ruleset '{name}'" + (known.Count > 0 ? $" (known: {string.Join(", ", known)})" : "");
+            return $"unknown ruleset '{(name.Length > 40 ? name[..40] + "…" : name)}'" + (known.Count > 0 ? $" (known: {string.Join(", ", known)})" : "");
         }
 
         private static string Kind(JsonElement value) => value.ValueKind switch

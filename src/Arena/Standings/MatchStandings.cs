@@ -6,7 +6,7 @@ using Bramble.Values;
 namespace Bramble.Arena.Standings;
 
 /// <summary>
-/// The standings of a set of game records (SPEC.md §6), computed from the records alone so that a
+/// The standings of a set of game records (docs/matches.md), computed from the records alone so that a
 /// finished match, its journal and the merge of its shards all give the same table.
 /// </summary>
 /// <param name="Players">Strongest first: by joint rating, then score.</param>

@@ -16,18 +16,15 @@ public static class EngineVerb
     public static Command Build()
     {
         var strategy = new Option<string?>("--strategy") { Description = $"Player to serve: {string.Join(", ", Players.Names)} (default: the strongest available)" };
-        // Numbers are read as text and checked here, and unknown tokens are reported here too: the
-        // parser's own error path prints help on stdout, which belongs to the protocol in this verb.
+        // Numbers are read as text and checked here; unknown words are reported by Entry on
+        // stderr (never on stdout, which belongs to the protocol in this verb).
         var budget = new Option<string?>("--budget-ms") { Description = $"Thinking budget per move when think gives no clock, and the cap when it does (default {EngineSettings.DefaultBudgetMs})" };
         var seed = new Option<string?>("--seed") { Description = "Seed for players that use chance (default 1)" };
         var nodes = new Option<string?>("--nodes") { Description = "Limit each move by work, at most N nodes, rather than by time: the same game gives the same moves on any machine (see docs/matches.md)" };
         var command = new Command("engine", "Serve the twine/1 protocol on stdin and stdout (see docs/protocol.md)") { strategy, budget, seed, nodes };
         command.Options.Add(DbOption.Option);
-        command.TreatUnmatchedTokensAsErrors = false;
         command.SetAction(parse => Failures.Guard(() =>
         {
-            if (parse.UnmatchedTokens.Count > 0)
-                throw new InputException($"engine: unexpected {string.Join(" ", parse.UnmatchedTokens.Select(t => $"'{t}'"))}; usage: bramble engine [--strategy S] [--budget-ms N] [--seed X] [--nodes N] [--db FILE] [--log FILE]");
             var settings = Settings(parse.GetValue(strategy), parse.GetValue(budget), parse.GetValue(seed), parse.GetValue(nodes));
             var db = parse.GetValue(DbOption.Option);
             // Check the database before serving, so a bad file is a bad-input exit rather than a broken session.
@@ -50,6 +47,8 @@ public static class EngineVerb
                     return context;
                 },
                 Log = Log.Logger,
+                // End of input while thinking (the harness died, even by kill -9) ends the engine within a second.
+                ForceExit = Environment.Exit,
             };
             using var stdin = Console.OpenStandardInput();
             using var stdout = Console.OpenStandardOutput();

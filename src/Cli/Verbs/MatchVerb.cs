@@ -6,6 +6,7 @@ using Bramble.Arena.Schedule;
 using Bramble.Arena.Spec;
 using Bramble.Arena.Standings;
 using Bramble.Cli.Report;
+using Bramble.Rules;
 using Serilog;
 
 namespace Bramble.Cli;
@@ -23,16 +24,19 @@ public static class MatchVerb
     {
         var spec = new Argument<string?>("spec") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
         var resume = new Option<bool>("--resume") { Description = "Continue the journal, skipping the games it holds" };
-        var shard = new Option<string?>("--shard") { Description = "Play only the games whose id ≡ K (mod N), into a journal of their own" };
+        var shard = new Option<string?>("--shard") { Description = "K/N: play only the games whose id ≡ K (mod N), into a journal of their own (e.g. 0/4)", HelpName = "K/N" };
         var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)" };
         var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
+        var createFolders = new Option<bool>("--create-folders") { Description = "Let the match make its journal's folder even outside the match file's folder" };
         var command = new Command("match", "Play a tournament between engines and print the standings (a match file runs the programs it names)")
         {
-            spec, resume, shard, parallel, json,
+            spec, resume, shard, parallel, json, createFolders,
         };
+        command.Options.Add(DbOption.Option);
         command.Subcommands.Add(BuildMerge());
         command.Subcommands.Add(BuildReport());
-        command.SetAction(parse => Run(parse.GetValue(spec), parse.GetValue(resume), parse.GetValue(shard), parse.GetValue(parallel), parse.GetValue(json)));
+        command.SetAction(parse => Run(parse.GetValue(spec), parse.GetValue(resume), parse.GetValue(shard), parse.GetValue(parallel), parse.GetValue(json),
+            parse.GetValue(createFolders), parse.GetValue(DbOption.Option)));
         return command;
     }
 
@@ -46,7 +50,7 @@ public static class MatchVerb
         return command;
     }
 
-    private static int Run(string? specPath, bool resume, string? shardText, int? parallel, bool json)
+    private static int Run(string? specPath, bool resume, string? shardText, int? parallel, bool json, bool createFolders, FileInfo? db)
     {
         var demo = specPath is null;
         if (demo)
@@ -85,6 +89,25 @@ public static class MatchVerb
             return Entry.BadInput;
         }
 
+        if (db is not null)
+        {
+            // Checked before any engine starts, so a bad file is a bad-input exit rather than a broken match.
+            try
+            {
+                DbOption.Load(db, new ValueContext());
+            }
+            catch (InputException e)
+            {
+                Console.Error.WriteLine($"match: {e.Message}");
+                return Entry.BadInput;
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                Console.Error.WriteLine($"match: --db {db}: {e.Message}");
+                return Entry.BadInput;
+            }
+        }
+
         using var cancel = new CancellationTokenSource();
         ConsoleCancelEventHandler onCancel = (_, e) =>
         {
@@ -108,6 +131,8 @@ public static class MatchVerb
             Fresh = demo && !resume,
             Shard = shard,
             Parallel = parallel,
+            CreateFolders = createFolders,
+            Database = db?.FullName,
             Progress = progress,
             Log = Log.Logger,
         };
@@ -200,15 +225,28 @@ public static class MatchVerb
                 Console.Error.WriteLine($"{verb}: no such journal: {path}");
                 return null;
             }
+            JournalContents contents;
             try
             {
-                read.Add((path, JournalFile.Read(path)));
+                contents = JournalFile.Read(path);
             }
             catch (JournalFormatException e)
             {
                 Console.Error.WriteLine($"{verb}: {e.Message}");
                 return null;
             }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                Console.Error.WriteLine($"match merge: cannot read {path}: {e.Message}");
+                return Entry.BadInput;
+            }
+            // Text with no game record in it at all (its one line unreadable) is some other file, not a journal cut short.
+            if (contents.Records.Count == 0 && contents.Notice is not null)
+            {
+                Console.Error.WriteLine($"match merge: {path} is not a journal: it holds no game record");
+                return Entry.BadInput;
+            }
+            read.Add((path, contents));
         }
         var merged = JournalMerge.Merge(read);
         foreach (var note in merged.Notices) Console.Error.WriteLine($"{verb}: {note}");
@@ -306,7 +344,8 @@ public static class MatchVerb
             var line = Format(_last!);
             if (inPlace)
             {
-                error.Write("\r" + line.PadRight(_width));
+                SafeWriter.CarriageReturn(error);
+                error.Write(line.PadRight(_width));
                 _width = Math.Max(_width, line.Length);
             }
             else error.WriteLine(line);
@@ -317,9 +356,9 @@ public static class MatchVerb
 
         public static string Format(MatchProgress p)
         {
-            var left = p.TimeLeft is { } t ? (t.TotalHours >= 1 ? $"{(int)t.TotalHours}h{t.Minutes:00}m" : $"{t.Minutes}m{t.Seconds:00}s") : "?";
+            var left = p.TimeLeft is { } t ? (t.TotalHours >= 1 ? $"{(int)t.TotalHours}h{t.Minutes:00}m left" : $"{t.Minutes}m{t.Seconds:00}s left") : "time left: estimating";
             var leader = p.Leader is { } l ? $"{l.Id} {100 * l.Score:0}%" : "-";
-            return $"games {p.Done}/{p.Total} · {p.GamesPerMinute:0.0}/min · {left} left · leader {leader}";
+            return $"games {p.Done}/{p.Total} · {p.GamesPerMinute:0.0}/min · {left} · leader {leader}";
         }
     }
 }

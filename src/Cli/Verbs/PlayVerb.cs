@@ -34,13 +34,13 @@ public static class PlayVerb
     public static Command Build()
     {
         var ruleset = new Argument<string>("ruleset") { Description = "hackenbush, domineering or forms" };
-        var position = new Argument<string?>("position") { Description = "start position (default: one from the demo suite)", Arity = ArgumentArity.ZeroOrOne };
+        var position = new Argument<string?>("position") { Description = "start position: the text, @file (read whole) or - for stdin (default: one from the demo suite)", Arity = ArgumentArity.ZeroOrOne };
         var asSide = new Option<string>("--as") { Description = "the side you play: left or right", DefaultValueFactory = _ => "left" };
         var first = new Option<string>("--first") { Description = "who moves first: left or right", DefaultValueFactory = _ => "left" };
-        var strategy = new Option<string>("--strategy") { Description = "the engine's strategy", DefaultValueFactory = _ => "perfect" };
+        var strategy = new Option<string>("--strategy") { Description = $"the engine's strategy: {string.Join(", ", Players.Names)} (docs/players.md)", DefaultValueFactory = _ => "perfect" };
         var budget = new Option<int>("--budget-ms") { Description = "the engine's thinking time per move", DefaultValueFactory = _ => 2000 };
         var seed = new Option<int>("--seed") { Description = "seed for random choices", DefaultValueFactory = _ => 1 };
-        var command = new Command("play", "Play a game against the engine in the terminal") { ruleset, position, asSide, first, strategy, budget, seed };
+        var command = new Command("play", "Play a game against the engine in the terminal\nMoves are typed as the ruleset names them: e7 (Hackenbush edge), c4 (Domineering cell), 2.1 (Forms term.option).") { ruleset, position, asSide, first, strategy, budget, seed };
         command.SetAction(parse => Failures.Guard(() =>
         {
             var rules = Rulesets.Find(parse.GetValue(ruleset)!) ?? throw new InputException(

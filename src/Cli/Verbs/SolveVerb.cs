@@ -25,7 +25,7 @@ public static class SolveVerb
         var strategy = new Option<string>("--strategy") { Description = "perfect (decomposition search) or alphabeta (whole-board search)", DefaultValueFactory = _ => "perfect" };
         strategy.AcceptOnlyFromAmong("perfect", "alphabeta");
         var budget = new Option<long>("--budget-ms") { Description = "Time budget of each first player's search, in milliseconds", DefaultValueFactory = _ => DefaultBudgetMs };
-        var json = new Option<bool>("--json") { Description = "Print the SPEC.md §7 JSON fields" };
+        var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
         var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>

@@ -31,6 +31,7 @@ public sealed class EngineHost
     private ValueContext? _values;
     private LineWriter _out = null!;
     private int _served;
+    private readonly ManualResetEventSlim _finished = new();
 
     public EngineHost(EngineSetup? setup = null)
     {
@@ -55,6 +56,7 @@ public sealed class EngineHost
         }
         finally
         {
+            _finished.Set();
             // The reading thread may still wait on input nobody will send; let it drop what it reads.
             queue.CompleteAdding();
             _worker?.Dispose();
@@ -113,16 +115,32 @@ public sealed class EngineHost
                 queue.Add(new Numbered(index, line));
             }
             queue.Add(new Numbered(index + 1, null));
+            WatchEnd();
         }
         catch (IOException e)
         {
             _log.Warning(e, "reading the input failed; treating it as its end");
             TryAdd(queue, new Numbered(index + 1, null));
+            WatchEnd();
         }
         catch (InvalidOperationException)
         {
             // The session is over (bye): nothing more is served.
         }
+    }
+
+    /// <summary>
+    /// At end of input the session ends as soon as the request in hand is answered; when that takes
+    /// longer than <see cref="EngineSetup.EndGrace"/> (a long computation that does not look at the
+    /// clock), <see cref="EngineSetup.ForceExit"/> ends the process: the harness is gone (perhaps
+    /// killed), and an engine must never outlive it thinking for nobody.
+    /// </summary>
+    private void WatchEnd()
+    {
+        if (_setup.ForceExit is not { } exit) return;
+        if (_finished.Wait(_setup.EndGrace)) return;
+        _log.Warning("end of input while still busy: exiting");
+        exit(0);
     }
 
     private static void TryAdd(BlockingCollection<Numbered> queue, Numbered item)
@@ -216,7 +234,7 @@ public sealed class EngineHost
             Reply(Err(ErrorCodes.BadPosition, $"column {e.Column + 1}: expected {e.Expected}, found {Found(e.Text, e.Column)}"));
             return;
         }
-        catch (Exception e) when (e is FormatException or ArgumentException)
+        catch (Exception e) when (e is FormatException or ArgumentException or OverflowException)
         {
             Reply(Err(ErrorCodes.BadPosition, e.Message));
             return;

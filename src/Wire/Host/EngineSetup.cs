@@ -36,6 +36,14 @@ public sealed record EngineSetup
 
     public ILogger Log { get; init; } = Serilog.Core.Logger.None;
 
+    /// <summary>
+    /// Ends the process when input has ended and the session is still busy after <see cref="EndGrace"/>
+    /// (null: never; a host inside another program, as in tests, is not its process).
+    /// </summary>
+    public Action<int>? ForceExit { get; init; }
+
+    public TimeSpan EndGrace { get; init; } = TimeSpan.FromSeconds(1);
+
     /// <summary>The informational version without its source-revision suffix, as one token.</summary>
     public static string VersionOf(Assembly assembly)
     {
