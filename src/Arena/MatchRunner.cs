@@ -289,6 +289,7 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
                         GameEnd.Crash, $"{game.PlayerOf(side)}: the engine could not be restarted: {e.Message}", [rules.Parse(game.Position.Text)]);
                     return await ToRecordAsync(game, result, analyst).ConfigureAwait(false);
                 }
+                if (spec.Seed is { } seed) await SeedAsync(game, seed, [left, right], cancel).ConfigureAwait(false);
                 result = await referee.PlayAsync(game, rules, left, right, spec.Clock, spec.Adjudicate, spec.AdjudicateMs, analyst, cancel).ConfigureAwait(false);
                 cancel.ThrowIfCancellationRequested();
                 return await ToRecordAsync(game, result, analyst).ConfigureAwait(false);
@@ -309,9 +310,30 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
             }
         }
 
+        /// <summary>
+        /// <c>set seed</c> for this game to both engines. An engine that refuses it has no chance in
+        /// it to seed (or no such setting) and plays on; one that fails otherwise fails again at
+        /// <c>begin</c>, where the referee turns it into a forfeit.
+        /// </summary>
+        private async Task SeedAsync(ScheduledGame game, long matchSeed, Engine[] engines, CancellationToken cancel)
+        {
+            foreach (var engine in engines)
+            {
+                var seed = GameSeed.For(matchSeed, game.Id, engine.PlayerId);
+                try
+                {
+                    await engine.Client.SetAsync("seed", seed.ToString(System.Globalization.CultureInfo.InvariantCulture), options.Timeouts.Reply, cancel).ConfigureAwait(false);
+                }
+                catch (EngineFailureException e)
+                {
+                    options.Log.Debug("Game {Game}: {Player} did not take seed {Seed}: {Error}", game.Id, engine.PlayerId, seed, e.Message);
+                }
+            }
+        }
+
         private async Task<GameRecord> ToRecordAsync(ScheduledGame game, GameResult result, Analyst analyst)
         {
-            var review = await DeepWork.RunAsync(() => analyst.Review(result.Positions, game.First, game.Left, game.Right, spec.AnalysisMs)).ConfigureAwait(false);
+            var review = await DeepWork.RunAsync(() => analyst.Review(result.Positions, game.First, game.Left, game.Right, spec.AnalysisMs, spec.AnalysisNodes)).ConfigureAwait(false);
             return new GameRecord
             {
                 Game = game.Id,

@@ -87,6 +87,9 @@ public class AnalystTests
             }
             var review = analyst.Review(positions, first, "blue", "red", 5000);
             Assert.Equal(expected, review.Blunders.Select(b => b.Ply));
+            // Limited by nodes instead of time (in a fresh context), the review says the same.
+            Assert.Equal(review, analyst.Review(positions, first, "blue", "red", 0, nodes: 10_000_000) with { Blunders = review.Blunders });
+            Assert.Equal(expected, analyst.Review(positions, first, "blue", "red", 0, nodes: 10_000_000).Blunders.Select(b => b.Ply));
             Assert.All(review.Blunders, b => Assert.Equal((b.Ply % 2 == 1) == (first == Side.Left) ? "blue" : "red", b.By));
             Assert.Equal(positions.Count - 1, review.Analysed);
         }

@@ -32,9 +32,9 @@ public class SchedulerTests
     }
 
     [Fact]
-    public void GauntletPairsTheFocusWithEveryOtherPlayer()
+    public void ChallengerPairsTheFocusWithEveryOtherPlayer()
     {
-        var schedule = Scheduler.Build(Spec(4, 2, SeatPlan.Swap, TournamentFormat.Gauntlet, "p3"));
+        var schedule = Scheduler.Build(Spec(4, 2, SeatPlan.Swap, TournamentFormat.Challenger, "p3"));
         // Derived from the definitions: 3 opponents × 2 positions × 2 seatings, all involving p3.
         Assert.Equal(12, schedule.Count);
         Assert.All(schedule, g => Assert.Contains("p3", g.Pair));

@@ -185,8 +185,8 @@ public class StatisticsTests
     {
         // Source: A. Wald 1945 — H1 at LLR ≥ upper bound, H0 at LLR ≤ lower bound, else continue.
         var bounds = SprtBounds.From(0.05, 0.05);
-        Assert.Equal(SprtDecision.AcceptH1, bounds.Decide(2.95));
-        Assert.Equal(SprtDecision.AcceptH0, bounds.Decide(-2.95));
+        Assert.Equal(SprtDecision.Alternative, bounds.Decide(2.95));
+        Assert.Equal(SprtDecision.Null, bounds.Decide(-2.95));
         Assert.Equal(SprtDecision.Continue, bounds.Decide(2.9));
         Assert.Equal(SprtDecision.Continue, bounds.Decide(-2.9));
     }

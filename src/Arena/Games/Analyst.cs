@@ -54,18 +54,36 @@ public sealed class Analyst(ILogger log, CancellationToken cancel = default, Fun
     /// move, movers alternating from <paramref name="first"/>): the mover at ply k blundered when it
     /// could win the position before its move and cannot win the one after. Plies are judged from
     /// the first on until the budget (for the whole game) runs out.
+    /// With <paramref name="nodes"/> the budget is that many nodes instead of time, and the game is
+    /// analysed in a fresh value context, so that what is judged depends on the game alone — not
+    /// on the machine, its load, or the games this analyst saw before (a reproducible match).
     /// </summary>
-    public GameReview Review(IReadOnlyList<IPosition> positions, Side first, string left, string right, long budgetMs)
+    public GameReview Review(IReadOnlyList<IPosition> positions, Side first, string left, string right, long budgetMs, long? nodes = null)
     {
-        if (budgetMs <= 0 || positions.Count == 0) return new GameReview(null, [], 0);
+        if ((nodes is null && budgetMs <= 0) || positions.Count == 0) return new GameReview(null, [], 0);
         var clock = Stopwatch.StartNew();
         var winners = new List<Side>();
         var mover = first;
-        foreach (var position in positions)
+        var kept = _context;
+        if (nodes is not null) _context = _newContext();
+        try
         {
-            if (Winner(position, mover, budgetMs - clock.ElapsedMilliseconds) is not { } winner) break;
-            winners.Add(winner);
-            mover = mover.Other();
+            long used = 0;
+            foreach (var position in positions)
+            {
+                var side = mover;
+                var winner = nodes is { } cap
+                    ? Budgeted(position, long.MaxValue, v => Context.Store.OutcomeOf(v).WinnerMovingFirst(side), cap - used)
+                    : Winner(position, mover, budgetMs - clock.ElapsedMilliseconds);
+                if (nodes is not null) used += Context.Nodes;
+                if (winner is not { } w) break;
+                winners.Add(w);
+                mover = mover.Other();
+            }
+        }
+        finally
+        {
+            if (nodes is not null) _context = kept;
         }
         if (winners.Count == 0) return new GameReview(null, [], 0);
         var blunders = new List<Blunder>();
@@ -83,13 +101,13 @@ public sealed class Analyst(ILogger log, CancellationToken cancel = default, Fun
     /// <paramref name="read"/> of the position's value, both within the budget: the store's own
     /// long computations (one canonical form of a long mixed stalk takes minutes) answer to it too.
     /// </summary>
-    private T? Budgeted<T>(IPosition position, long budgetMs, Func<Game, T> read) where T : struct
+    private T? Budgeted<T>(IPosition position, long budgetMs, Func<Game, T> read, long? nodeCap = null) where T : struct
     {
-        if (budgetMs <= 0 || cancel.IsCancellationRequested) return null;
+        if (budgetMs <= 0 || nodeCap <= 0 || cancel.IsCancellationRequested) return null;
         if (_context is { } old && old.Store.Count > StoreLimit) _context = null;
         var context = Context;
         context.Cancellation = cancel;
-        context.ResetCounters(budgetMs);
+        context.ResetCounters(budgetMs == long.MaxValue ? null : budgetMs, nodeCap);
         try
         {
             return read(position.Ruleset.Value(position, context));

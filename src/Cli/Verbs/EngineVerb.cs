@@ -7,7 +7,7 @@ using Serilog;
 namespace Bramble.Cli;
 
 /// <summary>
-/// <c>bramble engine [--strategy S] [--budget-ms N] [--seed X] [--db FILE] [--log FILE]</c>: serves
+/// <c>bramble engine [--strategy S] [--budget-ms N] [--seed X] [--nodes N] [--db FILE] [--log FILE]</c>: serves
 /// twine/1 on stdin/stdout until <c>bye</c> or end of input. Stdout carries only the protocol;
 /// logs go to stderr or the <c>--log</c> file.
 /// </summary>
@@ -20,11 +20,12 @@ public static class EngineVerb
         // stderr (never on stdout, which belongs to the protocol in this verb).
         var budget = new Option<string?>("--budget-ms") { Description = $"Thinking budget per move when think gives no clock, and the cap when it does (default {EngineSettings.DefaultBudgetMs})" };
         var seed = new Option<string?>("--seed") { Description = "Seed for players that use chance (default 1)" };
-        var command = new Command("engine", "Serve the twine/1 protocol on stdin and stdout (see docs/protocol.md)") { strategy, budget, seed };
+        var nodes = new Option<string?>("--nodes") { Description = "Limit each move by work, at most N nodes, rather than by time: the same game gives the same moves on any machine (see docs/matches.md)" };
+        var command = new Command("engine", "Serve the twine/1 protocol on stdin and stdout (see docs/protocol.md)") { strategy, budget, seed, nodes };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>
         {
-            var settings = Settings(parse.GetValue(strategy), parse.GetValue(budget), parse.GetValue(seed));
+            var settings = Settings(parse.GetValue(strategy), parse.GetValue(budget), parse.GetValue(seed), parse.GetValue(nodes));
             var db = parse.GetValue(DbOption.Option);
             // Check the database before serving, so a bad file is a bad-input exit rather than a broken session.
             DbOption.Load(db, new ValueContext());
@@ -32,9 +33,9 @@ public static class EngineVerb
             {
                 Version = EngineSetup.VersionOf(typeof(EngineVerb).Assembly),
                 Settings = settings,
-                CreatePlayer = (name, seed) =>
+                CreatePlayer = (name, seed, nodes) =>
                 {
-                    var player = Players.Create(name, seed);
+                    var player = Players.Create(name, seed, nodes);
                     // The perfect player keeps its own value context; the database serves it too.
                     if (player is PerfectPlayer perfect) DbOption.Load(db, perfect.Context);
                     return player;
@@ -56,9 +57,14 @@ public static class EngineVerb
         return command;
     }
 
-    private static EngineSettings Settings(string? strategy, string? budgetText, string? seedText)
+    private static EngineSettings Settings(string? strategy, string? budgetText, string? seedText, string? nodesText)
     {
         var settings = EngineSettings.Default(Players.Names);
+        if (nodesText is not null)
+        {
+            var (limited, error) = settings.With("nodes", nodesText, Players.Names);
+            settings = limited ?? throw new InputException($"--nodes: {error!.Text}");
+        }
         if (seedText is not null)
         {
             if (!int.TryParse(seedText, System.Globalization.NumberStyles.AllowLeadingSign, System.Globalization.CultureInfo.InvariantCulture, out var seed))

@@ -213,7 +213,8 @@ public sealed class EngineHost
             Reply(new ErrReply(error));
             return;
         }
-        if (settings!.Strategy != _settings.Strategy || settings.Seed != _settings.Seed) _player = null;
+        // A seed, once set, is where the player's chance starts: even the same seed again starts it afresh.
+        if (settings!.Strategy != _settings.Strategy || settings.Nodes != _settings.Nodes || set.Name == "seed") _player = null;
         _settings = settings;
         _log.Information("set {Name} {Value}", set.Name, set.Value);
         Reply(new OkReply());
@@ -253,6 +254,9 @@ public sealed class EngineHost
         }
         _position = position;
         _values = null;
+        // Limited by work, a player starts every game with an empty memo: what it remembers from
+        // earlier games would change its node counts, and so its moves, with the order games come in.
+        if (_settings.Nodes is not null) _player = null;
         _log.Information("begin {Ruleset} {Position}", ruleset.Name, position.Text);
         Reply(new OkReply(position.Components().Count));
     }
@@ -299,8 +303,10 @@ public sealed class EngineHost
             Reply(Err(ErrorCodes.OutOfOrder, $"{think.Side.Word()} moved last; it is {think.Side.Other().Word()}'s turn"));
             return;
         }
-        _player ??= _setup.CreatePlayer(_settings.Strategy, _settings.Seed);
-        var budget = MoveBudget.For(think.ClockMs, think.IncMs, _settings.BudgetMs, _position.Size);
+        _player ??= _setup.CreatePlayer(_settings.Strategy, _settings.Seed, _settings.Nodes);
+        var budget = _settings.Nodes is null
+            ? MoveBudget.For(think.ClockMs, think.IncMs, _settings.BudgetMs, _position.Size)
+            : MoveBudget.SafetyNet(think.ClockMs, _settings.BudgetMs);
         _log.Debug("think {Side} with {Budget} ms", think.Side.Word(), budget.TotalMilliseconds);
         var thinking = new Thinking(index, _player, _position, think.Side, budget, _setup.Grace, _out, _log);
         Interlocked.Exchange(ref _thinking, thinking);

@@ -20,7 +20,8 @@ public sealed record EngineSetup
 
     public IReadOnlyList<string> Strategies { get; init; } = Players.Names;
 
-    public Func<string, int, IPlayer> CreatePlayer { get; init; } = Players.Create;
+    /// <summary>Makes a player from a strategy name, a seed and a node limit per decision (null: none).</summary>
+    public Func<string, int, long?, IPlayer> CreatePlayer { get; init; } = Players.Create;
 
     public Func<ValueContext> CreateValueContext { get; init; } = () => new ValueContext();
 

@@ -23,7 +23,7 @@ public sealed class FixtureEngine
     private readonly string _rulesets;
     private readonly string _pick;
     private readonly Bramble.Rules.ValueContext _values = new();
-    private readonly Random _random;
+    private Random _random;
     private readonly Stream _out = Console.OpenStandardOutput();
     private readonly Lock _write = new();
     private readonly HeapsRuleset _rules = new();
@@ -68,6 +68,8 @@ public sealed class FixtureEngine
                     Say($"welcome name=fixture-{_mode} version=1 rulesets={_rulesets} colour=green");
                     break;
                 case "set":
+                    // The harness seeds each game of a seeded match: chance starts afresh from the seed.
+                    if (words.Length == 3 && words[1] == "seed") _random = new Random(int.Parse(words[2]));
                     Say("ok");
                     break;
                 case "begin":
