@@ -15,7 +15,7 @@ public static class FormsPicture
 
     private const string Style =
         "text{font-family:sans-serif;font-size:12px;fill:#222;paint-order:stroke;stroke:white;stroke-width:3px}" +
-        ".more{stroke:#999;stroke-width:1.5;stroke-dasharray:3,3}.left{stroke:#1f5fbf;stroke-width:2}.right{stroke:#c0392b;stroke-width:2}.node{fill:#333}" +
+        ".more{stroke:#999;stroke-width:1.5;stroke-dasharray:3,3}.left{stroke:#1f5fbf;stroke-width:2}.right{stroke:#c0392b;stroke-width:2;stroke-dasharray:6,3}.node{fill:#333}" +
         ".plus{font-size:20px;font-weight:bold}.title{font-size:13px;font-weight:bold}";
 
     private sealed class Node(string label, Side? via)

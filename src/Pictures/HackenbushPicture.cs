@@ -91,30 +91,53 @@ public static class HackenbushPicture
         }
     }
 
-    /// <summary>Each piece as an upright outline (trees and stalks read bottom-up), then the edge table.</summary>
-    public static string Text(HackenbushPosition position)
+    /// <summary>
+    /// Each piece as a graph a reader can follow in the terminal: a table of its edges (id,
+    /// colour, who may cut it, the two nodes it joins) and, under it, every node with the edges
+    /// that meet there, so circuits show as nodes reached more than one way. Node names come from
+    /// <paramref name="names"/> (stable for a whole game) or from the position itself.
+    /// </summary>
+    public static string Text(HackenbushPosition position, NodeNames? names = null)
     {
+        names ??= new NodeNames(position);
         var sb = new StringBuilder();
         var parts = position.Components();
         if (parts.Count == 0) sb.AppendLine("(no edges left)");
-        int n = 1;
-        foreach (HackenbushPosition part in parts)
+        for (int n = 0; n < parts.Count; n++)
         {
-            sb.AppendLine($"piece {n++}: {part.Text}");
-            var layout = new HackenbushLayout(part);
-            var byHeight = layout.Edges.GroupBy(e => Math.Max(Height(layout, e.From), Height(layout, e.To))).OrderByDescending(g => g.Key);
-            foreach (var level in byHeight)
-                sb.AppendLine($"   {string.Join("  ", level.Select(e => $"{e.Colour.Letter()}:{e.Id}"))}");
-            sb.AppendLine("   " + new string('=', 24) + " ground");
-        }
-        sb.AppendLine("edges:  id   colour  joins   cut by");
-        foreach (var e in position.Edges)
-        {
-            string colour = e.Colour switch { EdgeColour.Blue => "blue", EdgeColour.Red => "red", _ => "green" };
-            string by = e.Colour == EdgeColour.Green ? "either" : e.Colour.CutBy(Side.Left) ? "left" : "right";
-            sb.AppendLine($"        {e.Id,-4} {colour,-7} {(Node(e.From) + "-" + Node(e.To)),-12} {by}");
+            var part = (HackenbushPosition)parts[n];
+            var edges = part.Edges;
+            sb.AppendLine($"piece {n + 1} of {parts.Count} ({edges.Count} edge{(edges.Count == 1 ? "" : "s")})");
+            var rows = new List<string[]> { new[] { "edge", "colour", "cut by", "joins" } };
+            foreach (var e in edges)
+            {
+                var (a, b) = names.Ends(e);
+                string by = e.Colour == EdgeColour.Green ? "either" : e.Colour.CutBy(Side.Left) ? "left" : "right";
+                rows.Add([e.Id.ToString(), $"{e.Colour.Letter()} {ColourWord(e.Colour)}", by, a == b ? $"{a} (a loop)" : $"{a} - {b}"]);
+            }
+            foreach (var line in TextColumns.Lay(rows)) sb.Append("   ").AppendLine(line);
+            // The same piece seen from its nodes, ground first, then in name order.
+            var at = new SortedDictionary<string, List<string>>(Comparer<string>.Create(NodeOrder));
+            foreach (var e in edges)
+            {
+                var (a, b) = names.Ends(e);
+                foreach (var (here, there) in a == b ? new[] { (a, b) } : new[] { (a, b), (b, a) })
+                {
+                    if (!at.TryGetValue(here, out var list)) at[here] = list = new();
+                    list.Add($"{e.Id}>{there}");
+                }
+            }
+            var nodeRows = at.Select(kv => new[] { kv.Key + ":", string.Join("  ", kv.Value) }).ToList();
+            sb.AppendLine("   at each node (edge>other end):");
+            foreach (var line in TextColumns.Lay(nodeRows)) sb.Append("     ").AppendLine(line);
         }
         return sb.ToString().TrimEnd();
+    }
+
+    private static int NodeOrder(string a, string b)
+    {
+        static (int, int, string) Key(string s) => s == "ground" ? (0, 0, s) : s.Length > 1 && s[0] == 'n' && int.TryParse(s[1..], out int k) ? (1, k, s) : (2, 0, s);
+        return Key(a).CompareTo(Key(b));
     }
 
     /// <summary>The 1-based piece number (as in <see cref="HackenbushPosition.Components"/>) of every edge id.</summary>
@@ -129,7 +152,4 @@ public static class HackenbushPicture
 
     private static string ColourWord(EdgeColour c) => c switch { EdgeColour.Blue => "blue", EdgeColour.Red => "red", _ => "green" };
 
-    private static double Height(HackenbushLayout layout, int node) => node == 0 ? 0 : layout.Nodes[node].Y;
-
-    private static string Node(int n) => n == 0 ? "ground" : n.ToString();
 }

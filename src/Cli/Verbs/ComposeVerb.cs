@@ -17,7 +17,7 @@ public static class ComposeVerb
 
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "hackenbush, domineering, forms, or another registered ruleset" };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var value = new Argument<string>("value") { Description = "the target value in value notation (↑, *2, 3/8, {1|-1}, ...), @file, or - for stdin" };
         var maxSize = new Option<int?>("--max-size") { Description = "Look at positions up to this size (edges, cells, terms)" };
         var count = new Option<int>("--count") { Description = "How many positions to find", DefaultValueFactory = _ => 1 };

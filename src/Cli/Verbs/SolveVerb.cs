@@ -18,7 +18,7 @@ public static class SolveVerb
 
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "forms, hackenbush or domineering" };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var position = new Argument<string>("position") { Description = "position text, @file, or - for stdin" };
         var first = new Option<string>("--first") { Description = "Who moves first: left, right or both", DefaultValueFactory = _ => "both" };
         first.AcceptOnlyFromAmong("left", "right", "both");

@@ -11,7 +11,7 @@ public static class ValueVerb
 {
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "forms, hackenbush or domineering" };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var position = new Argument<string>("position") { Description = "position text, @file (read whole), or - for stdin" };
         var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
         var ascii = new Option<bool>("--ascii") { Description = "Print only ASCII: up, down, +-x and words instead of the symbols" };
