@@ -47,7 +47,7 @@ public static class EngineVerb
                     return context;
                 },
                 Log = Log.Logger,
-                // End of input while thinking (the harness died, even by kill -9) ends the engine within a second.
+                // End of input while thinking (the harness died, even by kill -9) ends the engine within seconds.
                 ForceExit = Environment.Exit,
             };
             using var stdin = Console.OpenStandardInput();

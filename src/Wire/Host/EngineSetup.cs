@@ -42,7 +42,7 @@ public sealed record EngineSetup
     /// </summary>
     public Action<int>? ForceExit { get; init; }
 
-    public TimeSpan EndGrace { get; init; } = TimeSpan.FromSeconds(1);
+    public TimeSpan EndGrace { get; init; } = TimeSpan.FromSeconds(5);
 
     /// <summary>The informational version without its source-revision suffix, as one token.</summary>
     public static string VersionOf(Assembly assembly)
