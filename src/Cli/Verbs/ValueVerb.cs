@@ -71,6 +71,9 @@ public static class ValueVerb
     public static string NotExactJson(long budgetMs) =>
         new JsonObject { ["exact"] = false, ["budget_ms"] = budgetMs }.ToJsonString();
 
+    /// <summary>The report for a position text, in a fresh value context.</summary>
+    public static ValueReport Analyse(string rulesetName, string text, bool ascii) => Analyse(rulesetName, text, ascii, new ValueContext());
+
     public static ValueReport Analyse(string rulesetName, string text, bool ascii, ValueContext context)
     {
         var rules = Rulesets.Find(rulesetName) ?? throw new InputException(
