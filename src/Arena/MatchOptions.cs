@@ -19,6 +19,16 @@ public sealed record MatchOptions
 
     public Shard Shard { get; init; } = Shard.Whole;
 
+    /// <summary>
+    /// A component-value database (or null): the referee's analysis starts from its values and adds
+    /// what it learns at the end of the run, and built-in engines (argv[0] <c>bramble</c>, verb
+    /// <c>engine</c>) are started with <c>--db</c> on it unless their run names one already.
+    /// </summary>
+    public string? Database { get; init; }
+
+    /// <summary>Let the match make a missing journal folder outside the match file's folder.</summary>
+    public bool CreateFolders { get; init; }
+
     /// <summary>Games at once; null: the spec's, else the number of cores.</summary>
     public int? Parallel { get; init; }
 
@@ -40,7 +50,7 @@ public sealed record MatchOptions
 /// <param name="Done">Games of this shard in the journal (earlier runs included).</param>
 /// <param name="Total">Games of this shard.</param>
 /// <param name="GamesPerMinute">Games finished per minute in this run.</param>
-/// <param name="TimeLeft">Estimated from this run's pace; null before the first game.</param>
+/// <param name="TimeLeft">Estimated from this run's pace; null until enough games of the run are done to judge it.</param>
 /// <param name="Leader">The player ahead on score, with its standing.</param>
 public sealed record MatchProgress(int Done, int Total, double GamesPerMinute, TimeSpan? TimeLeft, PlayerStanding? Leader);
 

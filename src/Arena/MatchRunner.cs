@@ -6,6 +6,8 @@ using Bramble.Arena.Schedule;
 using Bramble.Arena.Spec;
 using Bramble.Arena.Standings;
 using Bramble.Arena.Statistics;
+using Bramble.Rules;
+using Bramble.Rules.Database;
 using Bramble.Values;
 using Bramble.Wire.Client;
 
@@ -26,6 +28,10 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
         var log = options.Log;
         var notes = new List<string>();
         var journalPath = options.Shard.JournalPath(spec.JournalPath);
+        JournalPlace.Prepare(journalPath, spec.Folder, options.CreateFolders);
+        // Held until the run ends: a second run on the same journal refuses at once rather than
+        // interleaving its lines with this one's.
+        using var journalLock = TakeLock(journalPath);
         var contents = ReadJournal(journalPath);
         if (options.Fresh) contents = JournalContents.Empty with { ValidBytes = 0 };
         else if (!options.Resume && (contents.Records.Count > 0 || contents.Notice is not null))
@@ -59,12 +65,30 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
             {
                 var run = new Run(this, spec, options, writer, records, mine.Count, todo);
                 (stop, played) = await run.PlayAsync(cancel).ConfigureAwait(false);
+                // Not after a cancel: the user wants the harness gone, and the values are not lost, only not yet saved.
+                if (stop != MatchStop.Cancelled) run.SaveDatabase(notes);
                 if (stop == MatchStop.SprtDecided) notes.Add("the SPRT reached a decision: the match stopped early");
             }
         }
         records = records.OrderBy(r => r.Game).ToList();
         log.Information("Match {Title}: {Played} games played this run, {Done}/{Total} in the journal, {Stop}", spec.Title, played, records.Count, mine.Count, stop);
         return new MatchReport(spec, journalPath, records, MatchStandings.Compute(records, players, spec.Sprt), stop, played, mine.Count, notes);
+    }
+
+    private static JournalLock TakeLock(string path)
+    {
+        try
+        {
+            return JournalLock.Take(path);
+        }
+        catch (JournalInUseException e)
+        {
+            throw new MatchJobException(e.Message, e);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new MatchJobException($"cannot lock the journal {path} (its lock file is {JournalLock.LockPathOf(path)}): {e.Message}", e);
+        }
     }
 
     private static JournalContents ReadJournal(string path)
@@ -113,12 +137,53 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
         private int _played;
         private bool _decided;
         private Exception? _fatal;
+        // No time-left estimate before this many games of the run are done: the first games pay
+        // for warming up (and finish together when played in parallel), so their pace misleads.
+        private const int EstimateAfterGames = 3;
+        private int _estimateAfter = EstimateAfterGames;
+        private readonly List<Analyst> _analysts = [];
+
+        /// <summary>A value context for analysis, with the match's database loaded when it has one.</summary>
+        private ValueContext NewValueContext()
+        {
+            var context = new ValueContext();
+            if (options.Database is { } path)
+            {
+                try
+                {
+                    ComponentDatabase.Load(path, context);
+                }
+                catch (Exception e) when (e is DatabaseFormatException or IOException or UnauthorizedAccessException)
+                {
+                    options.Log.Warning("The database {Path} could not be read ({Error}); analysis goes on without it", path, e.Message);
+                }
+            }
+            return context;
+        }
+
+        /// <summary>Adds what analysis learnt to the match's database; a failure is a note, not a failed match.</summary>
+        public void SaveDatabase(List<string> notes)
+        {
+            if (options.Database is not { } path) return;
+            foreach (var analyst in _analysts)
+            {
+                try
+                {
+                    ComponentDatabase.Save(path, analyst.Context, "component values saved by bramble match");
+                }
+                catch (Exception e) when (e is DatabaseFormatException or IOException or UnauthorizedAccessException)
+                {
+                    notes.Add($"the database {path} was not updated: {e.Message}");
+                    return;
+                }
+            }
+        }
 
         public async Task<(MatchStop, int)> PlayAsync(CancellationToken cancel)
         {
             using var linked = CancellationTokenSource.CreateLinkedTokenSource(cancel, _stop.Token);
             var token = linked.Token;
-            var pool = new EnginePool(spec, options.Self, options.Timeouts, options.Limits, options.Log);
+            var pool = new EnginePool(spec, options.Self, options.Timeouts, options.Limits, options.Log, options.Database);
             // Ctrl-C (or an SPRT decision, or a fatal error) kills every engine at once rather than
             // waiting for the games in progress; those games are abandoned, not recorded.
             using var killer = token.Register(pool.KillAll);
@@ -126,6 +191,9 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
             {
                 await RollCallAsync(pool, token).ConfigureAwait(false);
                 var parallel = Math.Clamp(options.Parallel ?? spec.Parallel ?? Environment.ProcessorCount, 1, todo.Count);
+                // The pace is measured from here: starting the engines is paid once, not per game.
+                _clock.Restart();
+                _estimateAfter = Math.Min(todo.Count, Math.Max(EstimateAfterGames, 2 * parallel));
                 options.Log.Information("Playing {Count} games, {Parallel} at a time", todo.Count, parallel);
                 var workers = Enumerable.Range(0, parallel).Select(_ => Task.Run(() => WorkAsync(pool, token))).ToList();
                 await Task.WhenAll(workers).ConfigureAwait(false);
@@ -177,7 +245,8 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
 
         private async Task WorkAsync(EnginePool pool, CancellationToken cancel)
         {
-            var analyst = new Analyst(options.Log);
+            var analyst = new Analyst(options.Log, cancel, NewValueContext);
+            lock (_analysts) _analysts.Add(analyst);
             var referee = new Referee(options.Timeouts, options.Log);
             while (!cancel.IsCancellationRequested)
             {
@@ -220,6 +289,7 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
                         GameEnd.Crash, $"{game.PlayerOf(side)}: the engine could not be restarted: {e.Message}", [rules.Parse(game.Position.Text)]);
                     return await ToRecordAsync(game, result, analyst).ConfigureAwait(false);
                 }
+                if (spec.Seed is { } seed) await SeedAsync(game, seed, [left, right], cancel).ConfigureAwait(false);
                 result = await referee.PlayAsync(game, rules, left, right, spec.Clock, spec.Adjudicate, spec.AdjudicateMs, analyst, cancel).ConfigureAwait(false);
                 cancel.ThrowIfCancellationRequested();
                 return await ToRecordAsync(game, result, analyst).ConfigureAwait(false);
@@ -240,9 +310,30 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
             }
         }
 
+        /// <summary>
+        /// <c>set seed</c> for this game to both engines. An engine that refuses it has no chance in
+        /// it to seed (or no such setting) and plays on; one that fails otherwise fails again at
+        /// <c>begin</c>, where the referee turns it into a forfeit.
+        /// </summary>
+        private async Task SeedAsync(ScheduledGame game, long matchSeed, Engine[] engines, CancellationToken cancel)
+        {
+            foreach (var engine in engines)
+            {
+                var seed = GameSeed.For(matchSeed, game.Id, engine.PlayerId);
+                try
+                {
+                    await engine.Client.SetAsync("seed", seed.ToString(System.Globalization.CultureInfo.InvariantCulture), options.Timeouts.Reply, cancel).ConfigureAwait(false);
+                }
+                catch (EngineFailureException e)
+                {
+                    options.Log.Debug("Game {Game}: {Player} did not take seed {Seed}: {Error}", game.Id, engine.PlayerId, seed, e.Message);
+                }
+            }
+        }
+
         private async Task<GameRecord> ToRecordAsync(ScheduledGame game, GameResult result, Analyst analyst)
         {
-            var review = await DeepWork.RunAsync(() => analyst.Review(result.Positions, game.First, game.Left, game.Right, spec.AnalysisMs)).ConfigureAwait(false);
+            var review = await DeepWork.RunAsync(() => analyst.Review(result.Positions, game.First, game.Left, game.Right, spec.AnalysisMs, spec.AnalysisNodes)).ConfigureAwait(false);
             return new GameRecord
             {
                 Game = game.Id,
@@ -291,7 +382,7 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
                 var minutes = _clock.Elapsed.TotalMinutes;
                 var rate = minutes > 0 ? _played / minutes : 0;
                 var left = total - records.Count;
-                progress = new MatchProgress(records.Count, total, rate, rate > 0 ? TimeSpan.FromMinutes(left / rate) : null, standings.Leader);
+                progress = new MatchProgress(records.Count, total, rate, rate > 0 && _played >= _estimateAfter ? TimeSpan.FromMinutes(left / rate) : null, standings.Leader);
             }
             options.Progress?.Report(progress);
         }

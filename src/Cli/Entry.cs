@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
 using Serilog;
 using Serilog.Events;
 
@@ -14,9 +15,9 @@ public static class Entry
     public static readonly Option<FileInfo?> LogOption = new("--log") { Description = "Write log events to this file", Recursive = true };
     public static readonly Option<bool> VerboseOption = new("--verbose") { Description = "Log debug events too", Recursive = true };
 
-    public static int Run(string[] args)
+    public static RootCommand BuildRoot()
     {
-        var root = new RootCommand("Bramble: values, play and matches for sums of combinatorial games");
+        var root = new RootCommand("Bramble: values, play and matches for sums of combinatorial games (reference: docs/)");
         root.Options.Add(LogOption);
         root.Options.Add(VerboseOption);
         // One line per verb; each verb lives in Verbs/<Name>Verb.cs.
@@ -29,17 +30,74 @@ public static class Entry
         root.Subcommands.Add(SolveVerb.Build());
         root.Subcommands.Add(MatchVerb.Build());
         root.Subcommands.Add(EngineVerb.Build());
+        root.Subcommands.Add(ServeVerb.Build());
+        root.Subcommands.Add(ComposeVerb.Build());
+        return root;
+    }
 
-        var parse = root.Parse(args);
+    public static int Run(string[] args)
+    {
+        // Everything printed passes through one escaping writer per stream: text from input or
+        // from an engine cannot move the cursor, ring the bell or reverse a line (docs/cli.md).
+        var plainOut = Console.Out;
+        var plainError = Console.Error;
+        Console.SetOut(new SafeWriter(plainOut));
+        Console.SetError(new SafeWriter(plainError));
+        try
+        {
+            return RunSafely(args);
+        }
+        finally
+        {
+            Console.Out.Flush();
+            Console.Error.Flush();
+            Console.SetOut(plainOut);
+            Console.SetError(plainError);
+        }
+    }
+
+    private static int RunSafely(string[] args)
+    {
+        var root = BuildRoot();
+        // '@path' is Bramble's own (a position file, read whole by PositionInput); the
+        // library's response files would split its text into words first.
+        var parse = root.Parse(args, new ParserConfiguration { ResponseFileTokenReplacer = null });
         SetUpLogging(parse.GetValue(LogOption), parse.GetValue(VerboseOption));
         try
         {
+            if (args.Length == 0)
+            {
+                Console.Out.Write(VerbList.Text(root));
+                return Success;
+            }
             if (parse.Errors.Count > 0 && !IsHelpOrVersion(args))
             {
                 // Bad command-line words are bad input: say what is wrong on stderr and exit 2.
+                var command = parse.CommandResult.Command;
+                if (command == root && args[0] is var first && !first.StartsWith('-'))
+                {
+                    Console.Error.WriteLine($"unknown verb '{first}'{VerbList.Suggestion(first, root.Subcommands.Select(c => c.Name))}");
+                    Console.Error.Write(VerbList.Text(root));
+                    return BadInput;
+                }
                 foreach (var error in parse.Errors) Console.Error.WriteLine(error.Message);
-                Console.Error.WriteLine("see 'bramble --help' (or 'bramble <verb> --help')");
+                foreach (var token in parse.UnmatchedTokens)
+                {
+                    var names = command.Options.Concat(root.Options).SelectMany(o => o.Aliases.Prepend(o.Name)).Concat(command.Subcommands.Select(c => c.Name));
+                    var hint = VerbList.Suggestion(token, names);
+                    if (hint.Length > 0) Console.Error.WriteLine($"'{token}'{hint}");
+                }
+                Console.Error.WriteLine($"see 'bramble {CommandPath(parse.CommandResult)}--help'");
                 return BadInput;
+            }
+            if (IsHelpOrVersion(args))
+            {
+                // The library writes a subcommand's usage under its parent's arguments
+                // ("bramble match [<spec>] merge"); the help is caught and tidied.
+                var help = new StringWriter();
+                int code = parse.Invoke(new InvocationConfiguration { Output = help });
+                Console.Out.Write(help.ToString().Replace("match [<spec>] merge", "match merge", StringComparison.Ordinal));
+                return code;
             }
             return parse.Invoke();
         }
@@ -47,6 +105,15 @@ public static class Entry
         {
             Log.CloseAndFlush();
         }
+    }
+
+    /// <summary>"value " for bramble value, "match merge " for bramble match merge, "" for the root.</summary>
+    private static string CommandPath(CommandResult result)
+    {
+        var names = new List<string>();
+        for (SymbolResult? r = result; r is CommandResult c && c.Parent is not null; r = c.Parent) names.Add(c.Command.Name);
+        names.Reverse();
+        return names.Count == 0 ? "" : string.Join(" ", names) + " ";
     }
 
     private static bool IsHelpOrVersion(string[] args) => args.Any(a => a is "--help" or "-h" or "-?" or "--version");

@@ -10,6 +10,10 @@ public static class PositionPicture
         "hackenbush" => HackenbushPicture.Svg((Bramble.Rules.Hackenbush.HackenbushPosition)position),
         "forms" => FormsPicture.Svg((Bramble.Rules.Forms.FormsPosition)position),
         "domineering" => DomineeringPicture.Svg((Bramble.Rules.Domineering.DomineeringPosition)position),
+        "cutcake" => CutcakePicture.Svg((Bramble.Rules.Cutcake.CutcakePosition)position),
+        "toads-and-frogs" => ToadsAndFrogsPicture.Svg((Bramble.Rules.ToadsAndFrogs.ToadsAndFrogsPosition)position),
+        "clobber" => StonePicture.Svg(position, ((Bramble.Rules.Clobber.ClobberPosition)position).Grid, "Clobber"),
+        "konane" => StonePicture.Svg(position, ((Bramble.Rules.Konane.KonanePosition)position).Grid, "Konane"),
         _ => throw new ArgumentException($"no picture for ruleset '{position.Ruleset.Name}' yet"),
     };
 }

@@ -9,6 +9,11 @@ public static class TextPicture
     {
         "hackenbush" => HackenbushPicture.Text((Bramble.Rules.Hackenbush.HackenbushPosition)position),
         "domineering" => DomineeringPicture.Text((Bramble.Rules.Domineering.DomineeringPosition)position),
+        "toads-and-frogs" => ToadsAndFrogsPicture.Text((Bramble.Rules.ToadsAndFrogs.ToadsAndFrogsPosition)position),
+        "clobber" => StonePicture.Text(position, ((Bramble.Rules.Clobber.ClobberPosition)position).Grid,
+            "A move takes a stone onto an orthogonal neighbour of the other colour: b2-c2. Left plays x, Right plays o."),
+        "konane" => StonePicture.Text(position, ((Bramble.Rules.Konane.KonanePosition)position).Grid,
+            "A move jumps a stone over opposing stones into empty squares along a line: c3-c5. Left plays x, Right plays o."),
         _ => Generic(position),
     };
 

@@ -1,3 +1,5 @@
+using Bramble.Values;
+
 namespace Bramble.Rules;
 
 /// <summary>Bad position text: the text, the 0-based column of the fault and what was expected there.</summary>
@@ -8,8 +10,8 @@ public sealed class PositionSyntaxException(string text, int column, string expe
     public int Column { get; } = column;
     public string Expected { get; } = expected;
 
-    /// <summary>The text with a caret under the offending character, for people.</summary>
-    public string Pointer => $"{Text}\n{new string(' ', Math.Min(Column, Text.Length))}^ expected {Expected}";
+    /// <summary>The faulty line (a window of it around the fault, escaped) with a caret under the fault, for people.</summary>
+    public string Pointer => PrintableText.Caret(Text, Column, Expected);
 }
 
 /// <summary>A move that does not parse or is not legal in the position for that side.</summary>

@@ -12,7 +12,7 @@ public interface IPosition
 {
     IRuleset Ruleset { get; }
 
-    /// <summary>The position in the notation of SPEC.md §3 (parses back to an equal position).</summary>
+    /// <summary>The position in the ruleset's notation (docs/&lt;ruleset&gt;.md) (parses back to an equal position).</summary>
     string Text { get; }
 
     /// <summary>The legal moves of <paramref name="side"/>, in a fixed order.</summary>

@@ -10,7 +10,7 @@ public interface IRuleset
 {
     string Name { get; }
 
-    /// <summary>Parses SPEC.md §3 notation; throws <see cref="PositionSyntaxException"/>.</summary>
+    /// <summary>Parses the ruleset's position notation (docs/&lt;ruleset&gt;.md); throws <see cref="PositionSyntaxException"/>.</summary>
     IPosition Parse(string text);
 
     /// <summary>

@@ -8,6 +8,10 @@ public static class Rulesets
         new Hackenbush.HackenbushRuleset(),
         new Domineering.DomineeringRuleset(),
         new Forms.FormsRuleset(),
+        new Cutcake.CutcakeRuleset(),
+        new ToadsAndFrogs.ToadsAndFrogsRuleset(),
+        new Clobber.ClobberRuleset(),
+        new Konane.KonaneRuleset(),
     ];
 
     public static IReadOnlyList<IRuleset> All => s_all;

@@ -13,8 +13,17 @@ public sealed class ValueContext
     private readonly Stopwatch _clock = Stopwatch.StartNew();
     private long _deadlineMs = long.MaxValue;
     private long _nodeCap = long.MaxValue;
+    // Whether the store's long computations answer to the budget: from ResetCounters until
+    // EndBudget, so that a budget left over from an earlier task never stops later work.
+    private bool _watching;
 
-    public ValueContext(GameStore? store = null) => Store = store ?? new GameStore();
+    public ValueContext(GameStore? store = null)
+    {
+        Store = store ?? new GameStore();
+        // The budget holds inside the store's own long computations too (one canonical form
+        // can take minutes), not only between the nodes this context counts.
+        Store.Interrupt = () => { if (_watching) CheckClock(); };
+    }
 
     public GameStore Store { get; }
 
@@ -33,7 +42,14 @@ public sealed class ValueContext
         _clock.Restart();
         _deadlineMs = budgetMs ?? long.MaxValue;
         _nodeCap = nodeCap ?? long.MaxValue;
+        _watching = true;
     }
+
+    /// <summary>
+    /// Ends the budget's hold on the store's own computations (the node count and the clock stay
+    /// readable): work done next with this context's store, outside any budgeted task, is not cut short.
+    /// </summary>
+    public void EndBudget() => _watching = false;
 
     public long ElapsedMs => _clock.ElapsedMilliseconds;
 
@@ -42,7 +58,13 @@ public sealed class ValueContext
     {
         Nodes++;
         if (Nodes > _nodeCap) throw new BudgetExceededException("node cap reached");
-        if ((Nodes & 63) == 0 && (_clock.ElapsedMilliseconds > _deadlineMs || Cancellation.IsCancellationRequested))
+        if ((Nodes & 63) == 0) CheckClock();
+    }
+
+    /// <summary>Throws <see cref="BudgetExceededException"/> when the time budget is spent or the work was cancelled.</summary>
+    public void CheckClock()
+    {
+        if (_clock.ElapsedMilliseconds > _deadlineMs || Cancellation.IsCancellationRequested)
             throw new BudgetExceededException("time budget spent");
     }
 

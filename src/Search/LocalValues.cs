@@ -58,6 +58,10 @@ public sealed class LocalValues(ValueContext context)
             if (context.Nodes > nodeCap || context.ElapsedMs < remaining) _failedAt[key] = Math.Max(nodeCap, failed);
             return null;
         }
+        finally
+        {
+            context.EndBudget();
+        }
     }
 
     /// <summary>The exact value with no cap but the decision's budget.</summary>

@@ -1,5 +1,7 @@
 using System.Diagnostics;
 using Bramble.Rules;
+using Bramble.Rules.Domineering;
+using Bramble.Search.Board;
 using Bramble.Values;
 
 namespace Bramble.Search;
@@ -24,6 +26,7 @@ public sealed class PerfectPlayer : IPlayer
     private readonly SumSearch _sums;
     private readonly LargeSearch _large;
     private readonly TemperatureStrategy _fallback;
+    private readonly WholeBoard _board;
 
     public PerfectPlayer(PerfectSettings? settings = null, ValueContext? context = null)
     {
@@ -33,7 +36,11 @@ public sealed class PerfectPlayer : IPlayer
         _sums = new SumSearch(Context.Store);
         _large = new LargeSearch(_sums, _values) { PieceCap = Settings.PieceCap, SmallSize = Settings.SmallSize };
         _fallback = new TemperatureStrategy(new ThermalReader(_values) { ExactSize = Settings.SmallSize });
+        _board = new WholeBoard(Settings.BoardOptions);
     }
+
+    /// <summary>The whole-board search this player uses for big Domineering boards (its table lives as long as the player).</summary>
+    public WholeBoard WholeBoard => _board;
 
     public string Name => "perfect";
 
@@ -55,6 +62,22 @@ public sealed class PerfectPlayer : IPlayer
         _large.Budget = b;
         if (position.Moves(side).Count == 0)
             return new Decision(null, 0, b.ElapsedMs, Exact: true, Value: TryValueText(position, b), Winning: false);
+
+        if (Settings.WholeBoard && position is DomineeringPosition board && WholeBoard.Fits(board.Board)
+            && position.Components().Any(c => c.Size > Settings.ExactSize))
+        {
+            // Half the time for the exact search, the rest for the depth-limited one if that fails.
+            long exactMs = totalMs == long.MaxValue ? long.MaxValue : totalMs / 2;
+            var answer = _board.Solve(board, side, () => b.Spent || clock.ElapsedMilliseconds >= exactMs);
+            if (answer.Win is { } win)
+                return new Decision(answer.Move, answer.Nodes, b.ElapsedMs, Exact: true, Winning: win,
+                    Line: answer.Line.Select(position.FormatMove).ToList());
+            // Out of budget: the depth-limited search on the same counts, in the time kept back.
+            long deadline = totalMs == long.MaxValue ? long.MaxValue : totalMs;
+            var play = _board.Play(board, side, () => halt.IsCancellationRequested || clock.ElapsedMilliseconds >= deadline);
+            return new Decision(play.Move, answer.Nodes + play.Nodes, clock.ElapsedMilliseconds, Exact: false,
+                Line: [position.FormatMove(play.Move)]);
+        }
 
         IReadOnlyList<ValuedComponent> components;
         List<Candidate> candidates;
@@ -196,8 +219,14 @@ public sealed class PerfectPlayer : IPlayer
         if (components.Any(c => c.Value is null)) return null;
         var store = Context.Store;
         var (key, offset) = _sums.Normalise(components.Select(c => c.Value!.Value));
-        var terms = key.Games.Select(g => store.Format(g)).ToList();
-        if (!offset.IsZero || terms.Count == 0) terms.Add(store.Format(store.Number(offset)));
+        // One writer for one value: a sum of at most one game and a number (3/4 + * is 3/4*)
+        // is written as that value is everywhere else; a longer sum keeps its terms, as
+        // 'value' lists components.
+        var games = key.Games.ToList();
+        if (games.Count <= 1)
+            return store.Format(games.Count == 0 ? store.Number(offset) : store.Add(games[0], store.Number(offset)));
+        var terms = games.Select(g => store.Format(g)).ToList();
+        if (!offset.IsZero) terms.Add(store.Format(store.Number(offset)));
         return string.Join(" + ", terms);
     }
 

@@ -33,4 +33,14 @@ public sealed record PerfectSettings
     public double FallbackShare { get; init; } = 0.1;
 
     public long FallbackMaxMs { get; init; } = 2_000;
+
+    /// <summary>
+    /// Domineering boards of at most 128 cells with a component over <see cref="ExactSize"/> go to
+    /// the bitboard search of the whole board (<see cref="Board.WholeBoard"/>) instead of the
+    /// decomposition search.
+    /// </summary>
+    public bool WholeBoard { get; init; } = true;
+
+    /// <summary>The switches of the whole-board search (threads, table size, each ingredient).</summary>
+    public Board.BoardSearchOptions BoardOptions { get; init; } = new();
 }

@@ -6,9 +6,10 @@ namespace Bramble.Search;
 /// <summary>Who wins with one side moving first, and a winning first move when that side wins.</summary>
 /// <param name="Winner">The winner, or null when the search ran out of budget.</param>
 /// <param name="Move">A winning first move for <paramref name="First"/> when it wins, else null.</param>
-public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact);
+/// <param name="Line">The principal line the search reported (winning moves for the winner, stubborn defence for the loser), when it has one.</param>
+public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact, IReadOnlyList<string>? Line = null);
 
-/// <summary>What <c>bramble solve</c> reports (SPEC.md §7).</summary>
+/// <summary>What <c>bramble solve</c> reports (docs/cli.md).</summary>
 /// <param name="Outcome">The outcome class, when both sides were solved exactly.</param>
 public sealed record SolveReport(Outcome? Outcome, SolveAnswer? LeftFirst, SolveAnswer? RightFirst, long Nodes, long ElapsedMs, string Strategy, bool Exact);
 
@@ -24,7 +25,7 @@ public static class Solver
             var d = player.Choose(position, first, budget, halt);
             Side? winner = d.Exact && d.Winning is { } w ? (w ? first : first.Other()) : null;
             string? move = winner == first && d.Move is { } m ? position.FormatMove(m) : null;
-            var answer = new SolveAnswer(first, winner, move, d.Nodes, d.ElapsedMs, d.Exact && winner is not null);
+            var answer = new SolveAnswer(first, winner, move, d.Nodes, d.ElapsedMs, d.Exact && winner is not null, d.Exact ? d.Line : null);
             if (first == Side.Left) left = answer; else right = answer;
         }
         var answers = new[] { left, right }.Where(a => a is not null).Select(a => a!).ToList();

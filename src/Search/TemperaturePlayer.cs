@@ -22,6 +22,9 @@ public sealed class TemperaturePlayer : IPlayer
     }
 
     public TemperatureRule Rule { get; }
+
+    /// <summary>Node cap of one decision; past it the player answers with its last resort (the most mobile move).</summary>
+    public long NodeCap { get; init; } = long.MaxValue;
     public ValueContext Context { get; }
 
     public string Name => Rule.ToString().ToLowerInvariant();
@@ -31,7 +34,7 @@ public sealed class TemperaturePlayer : IPlayer
 
     public Decision Choose(IPosition position, Side side, TimeSpan budget, CancellationToken halt = default)
     {
-        var b = new SearchBudget(budget, halt);
+        var b = new SearchBudget(budget, halt, NodeCap);
         (IReadOnlySet<string>, Dyadic)? threat = null;
         if (Rule == TemperatureRule.Sentestrat && _left is { } before && before.Side == side)
         {

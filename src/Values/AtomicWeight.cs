@@ -3,6 +3,7 @@ namespace Bramble.Values;
 public sealed partial class GameStore
 {
     private readonly Dictionary<int, int> _atomicWeight = new();
+    private readonly Dictionary<int, bool> _allSmall = new();
 
     /// <summary>
     /// The atomic weight of an all-small game (null for others), by the atomic weight calculus of

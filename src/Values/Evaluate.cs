@@ -35,7 +35,7 @@ public sealed partial class GameStore
         }
     }
 
-    /// <summary>Parses SPEC.md §2 notation to a canonical game; throws <see cref="ValueSyntaxException"/>.</summary>
+    /// <summary>Parses the value notation (docs/values.md) to a canonical game; throws <see cref="ValueSyntaxException"/>.</summary>
     public Game Parse(string text) => Evaluate(ValueNotation.Parse(text));
 
     /// <summary>The published notation; <paramref name="ascii"/> uses words for the symbols.</summary>

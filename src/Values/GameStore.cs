@@ -53,6 +53,25 @@ public sealed partial class GameStore
     /// <summary>How many distinct games the store holds.</summary>
     public int Count => _left.Count;
 
+    /// <summary>
+    /// Called every <see cref="InterruptPeriod"/> order tests and constructions; a caller with a
+    /// budget or a cancel throws from it to stop a long computation. One canonical form can take
+    /// minutes (a long mixed Hackenbush stalk), and its caller's own checks between values never
+    /// run in the meantime. The store stays consistent when it throws: every cache entry is
+    /// written only once its answer is complete.
+    /// </summary>
+    public Action? Interrupt { get; set; }
+
+    private const int InterruptPeriod = 1024;
+    private int _untilInterrupt = InterruptPeriod;
+
+    private void Poll()
+    {
+        if (--_untilInterrupt > 0) return;
+        _untilInterrupt = InterruptPeriod;
+        Interrupt?.Invoke();
+    }
+
     // ---------------------------------------------------------------- construction
 
     public Game Number(Dyadic value)
@@ -146,6 +165,7 @@ public sealed partial class GameStore
 
     private Game MakeFromLists(List<int> l, List<int> r)
     {
+        Poll();
         SortUnique(l);
         SortUnique(r);
         if (TryNumberRule(l, r, out var quick)) return quick;
@@ -448,6 +468,7 @@ public sealed partial class GameStore
     private bool Leq(int a, int b)
     {
         if (TrySettle(a, b, out bool settled)) return settled;
+        Poll();
         // A refutation that needs no search is looked for first, over all options, before any
         // option is searched: the first search would otherwise often go deep for nothing. The
         // options settled there (the first 64 of a side) are not asked again.
@@ -567,17 +588,24 @@ public sealed partial class GameStore
         if (g == Zero) return true;
         if (IsNumber(g)) return false;
         if (_tag[g.Id] is { } t) return t.X.IsZero;
+        // Memoised: game trees share subgames, and an unmemoised walk visits every path.
+        if (_allSmall.TryGetValue(g.Id, out bool known)) return known;
         var l = LeftIds(g.Id);
         var r = RightIds(g.Id);
-        if (l.Length == 0 || r.Length == 0) return false;
-        foreach (int o in l) if (!IsAllSmall(new Game(o))) return false;
-        foreach (int o in r) if (!IsAllSmall(new Game(o))) return false;
-        return true;
+        bool result = l.Length > 0 && r.Length > 0;
+        foreach (int o in l) result = result && IsAllSmall(new Game(o));
+        foreach (int o in r) result = result && IsAllSmall(new Game(o));
+        _allSmall[g.Id] = result;
+        return result;
     }
 
     /// <summary>Smaller than every positive number and larger than every negative one (0 included).</summary>
     public bool IsInfinitesimal(Game g) => g == Zero || (!IsNumber(g) && LeftStop(g).IsZero && RightStop(g).IsZero);
 
+    /// <summary>
+    /// The birthday, saturating at <see cref="int.MaxValue"/> (a huge number such as 10^30 is born
+    /// that late); <see cref="ExactBirthday"/> gives the true figure for such games.
+    /// </summary>
     public int Birthday(Game g)
     {
         int cached = _birthday[g.Id];
@@ -585,19 +613,39 @@ public sealed partial class GameStore
         int b;
         if (_number[g.Id] is { } x)
         {
-            var abs = x.Abs();
-            b = abs.IsInteger ? (int)abs.Numerator : (int)abs.Floor() + 1 + abs.Exponent;
+            var day = NumberBirthday(x);
+            b = day >= int.MaxValue ? int.MaxValue : (int)day;
         }
         else if (_tag[g.Id] is { X.IsZero: true, N: 0 } nim) b = nim.M;
         else
         {
             b = 0;
-            foreach (int o in LeftIds(g.Id)) b = Math.Max(b, Birthday(new Game(o)) + 1);
-            foreach (int o in RightIds(g.Id)) b = Math.Max(b, Birthday(new Game(o)) + 1);
+            foreach (int o in LeftIds(g.Id)) b = Math.Max(b, Later(Birthday(new Game(o))));
+            foreach (int o in RightIds(g.Id)) b = Math.Max(b, Later(Birthday(new Game(o))));
         }
         _birthday[g.Id] = b;
         return b;
     }
+
+    /// <summary>The birthday without saturation (only worth asking when <see cref="Birthday"/> is int.MaxValue).</summary>
+    public System.Numerics.BigInteger ExactBirthday(Game g)
+    {
+        int day = Birthday(g);
+        if (day < int.MaxValue) return day;
+        if (_number[g.Id] is { } x) return NumberBirthday(x);
+        System.Numerics.BigInteger b = 0;
+        foreach (int o in LeftIds(g.Id)) b = System.Numerics.BigInteger.Max(b, ExactBirthday(new Game(o)) + 1);
+        foreach (int o in RightIds(g.Id)) b = System.Numerics.BigInteger.Max(b, ExactBirthday(new Game(o)) + 1);
+        return b;
+    }
+
+    private static System.Numerics.BigInteger NumberBirthday(Dyadic x)
+    {
+        var abs = x.Abs();
+        return abs.IsInteger ? abs.Numerator : abs.Floor() + 1 + abs.Exponent;
+    }
+
+    private static int Later(int day) => day == int.MaxValue ? day : day + 1;
 
     // ---------------------------------------------------------------- helpers
 

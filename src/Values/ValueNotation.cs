@@ -3,11 +3,21 @@ using System.Text;
 namespace Bramble.Values;
 
 /// <summary>
-/// The value notation of SPEC.md §2, in: numbers, nimbers, ups and downs (symbols or the ASCII
+/// The value notation of docs/values.md, in: numbers, nimbers, ups and downs (symbols or the ASCII
 /// words), ±x, braces with the multi-bar shorthand, sums, differences and parentheses.
 /// </summary>
 public static class ValueNotation
 {
+    /// <summary>
+    /// Deepest nesting read: braces, parentheses and bar levels of the multi-bar shorthand
+    /// together. Reading and valuing recurse once per level, so a limit keeps a hostile text
+    /// from overflowing the stack; deeper text gets a located message (docs/values.md).
+    /// </summary>
+    public const int MaxDepth = 1000;
+
+    /// <summary>Largest multiple of ↑ read (n·↑ is built with about n records).</summary>
+    public const int MaxUps = 100_000;
+
     /// <summary>Parses a value expression; throws <see cref="ValueSyntaxException"/> with the column and what was expected.</summary>
     public static ValueExpr Parse(string text)
     {
@@ -18,15 +28,86 @@ public static class ValueNotation
     /// <summary>Splits a top-level sum into its terms as written (a subtracted term comes back negated), with 0-based start columns.</summary>
     public static IReadOnlyList<(ValueExpr Term, int Column)> ParseTerms(string text)
     {
+        // Reading recurses once per nesting level (a few frames each): a text long enough to
+        // nest deeply is read on a stack of its own, so the caller's stack size does not matter.
+        if (text.Length > DeepTextLength) return BigStack.Run(() => ParseTermsHere(text), ReadingStackBytes);
+        return ParseTermsHere(text);
+    }
+
+    /// <summary>Texts longer than this are read on a stack of <see cref="ReadingStackBytes"/>.</summary>
+    private const int DeepTextLength = 2000;
+
+    private const int ReadingStackBytes = 64 * 1024 * 1024;
+
+    private static IReadOnlyList<(ValueExpr Term, int Column)> ParseTermsHere(string text)
+    {
         var p = new Parser(text);
         var (terms, parts) = p.ParseScope(0, text.Length, nested: false);
         if (parts is null) return terms;
         return terms.Select(t => (SharedExpr.Around(t.Item1, parts), t.Item2)).ToList();
     }
 
-    private sealed class Parser(string text)
+    private sealed class Parser
     {
+        private readonly string text;
+
+        // For every bracket, the index of its partner (-1 for a ')' or '}' with none): found in one
+        // pass up front, so every scan below jumps over a bracketed stretch instead of walking
+        // it, and reading stays linear in the text however deep it nests.
+        private readonly int[] _partner;
+
+        // Nesting levels entered so far (braces, parentheses, bar levels): bounded by MaxDepth.
+        private int _depth;
+
         public int Pos;
+
+        public Parser(string text)
+        {
+            this.text = text;
+            _partner = PairBrackets();
+        }
+
+        private int[] PairBrackets()
+        {
+            var partner = new int[text.Length];
+            var open = new Stack<int>();
+            for (int i = 0; i < text.Length; i++)
+            {
+                char ch = text[i];
+                if (ch == '{' || ch == '(')
+                {
+                    if (open.Count >= MaxDepth) { Pos = i; throw Fail($"at most {MaxDepth} nested brackets (this one is {MaxDepth + 1} deep)"); }
+                    open.Push(i);
+                }
+                else if (ch == '}' || ch == ')')
+                {
+                    if (open.Count == 0) { partner[i] = -1; continue; }
+                    int o = open.Pop();
+                    char want = text[o] == '{' ? '}' : ')';
+                    if (ch != want) { Pos = i; throw Fail($"'{want}' to close the '{text[o]}' at column {o + 1}"); }
+                    partner[o] = i;
+                    partner[i] = o;
+                }
+            }
+            if (open.Count > 0)
+            {
+                // The outermost unclosed bracket is the one the reader meets first.
+                int o = open.ToArray()[^1];
+                Pos = text.Length;
+                throw Fail($"'{(text[o] == '{' ? '}' : ')')}' to close the '{text[o]}' at column {o + 1}");
+            }
+            return partner;
+        }
+
+        /// <summary>Index just past the bracketed stretch opened at i (i itself is '{' or '(').</summary>
+        private int Past(int i) => _partner[i] + 1;
+
+        private static bool Opens(char ch) => ch == '{' || ch == '(';
+
+        private void Enter()
+        {
+            if (++_depth > MaxDepth) throw Fail($"at most {MaxDepth} levels of nesting (braces, parentheses and bar levels together)");
+        }
 
         public ValueSyntaxException Fail(string expected) => new(text, Pos, expected);
 
@@ -51,6 +132,7 @@ public static class ValueNotation
             // Brackets without 'where' are no scope of their own: their names are the enclosing ones.
             var outer = _references;
             if (where >= 0 || !nested) _references = new List<PartExpr>();
+            if (nested) Enter();
             try
             {
                 Pos = start;
@@ -75,19 +157,18 @@ public static class ValueNotation
             finally
             {
                 _references = outer;
+                if (nested) _depth--;
             }
         }
 
         /// <summary>Start of the word 'where' in [start, end) outside all brackets, or -1.</summary>
         private int FindWhere(int start, int end)
         {
-            int depth = 0;
             for (int i = start; i + WhereWord.Length <= end; i++)
             {
                 char ch = text[i];
-                if (ch == '{' || ch == '(') depth++;
-                else if (ch == '}' || ch == ')') depth--;
-                else if (depth == 0 && string.CompareOrdinal(text, i, WhereWord, 0, WhereWord.Length) == 0
+                if (Opens(ch)) i = Past(i) - 1;
+                else if (string.CompareOrdinal(text, i, WhereWord, 0, WhereWord.Length) == 0
                     && (i == 0 || !char.IsLetter(text[i - 1]))
                     && (i + WhereWord.Length == end || !char.IsLetter(text[i + WhereWord.Length])))
                     return i;
@@ -154,15 +235,16 @@ public static class ValueNotation
             return name;
         }
 
-        private int NextSemicolon(int from, int end)
+        private int NextSemicolon(int from, int end) => NextAtThisLevel(from, end, ';');
+
+        /// <summary>The first <paramref name="mark"/> in [from, end) outside brackets, or end.</summary>
+        private int NextAtThisLevel(int from, int end, char mark)
         {
-            int depth = 0;
             for (int i = from; i < end; i++)
             {
                 char ch = text[i];
-                if (ch == '{' || ch == '(') depth++;
-                else if (ch == '}' || ch == ')') depth--;
-                else if (ch == ';' && depth == 0) return i;
+                if (Opens(ch)) i = Past(i) - 1;
+                else if (ch == mark) return i;
             }
             return end;
         }
@@ -174,29 +256,55 @@ public static class ValueNotation
             var terms = new List<(ValueExpr, int)>();
             SkipSpace(end);
             if (Pos >= end) throw Fail("a value");
-            bool negate = false;
             int column = Pos;
-            if (text[Pos] == '-' && !StartsNumber(Pos + 1, end)) { negate = true; Pos++; }
-            else if (text[Pos] == '+') Pos++;
+            // A leading '+' is dropped; '+-' is ± (read by ParseAtom); a leading '-' is read
+            // there too, as the negative of whatever term follows.
+            if (text[Pos] == '+' && !StartsSwitch(end)) Pos++;
             while (true)
             {
                 SkipSpace(end);
+                bool negate = false;
+                if (terms.Count > 0)
+                {
+                    // After the first term: '+', '-', or '±' / '+-' (a ± b is a + ±b).
+                    if (StartsSwitch(end)) { }
+                    else if (text[Pos] == '+') Pos++;
+                    else { negate = true; Pos++; }
+                    SkipSpace(end);
+                }
                 var term = ParseAtom(end);
                 terms.Add((negate ? new NegateExpr(term) : term, column));
                 SkipSpace(end);
-                if (Pos >= end || (text[Pos] != '+' && text[Pos] != '-')) break;
+                if (Pos >= end || (text[Pos] != '+' && text[Pos] != '-' && text[Pos] != '±')) break;
                 column = Pos;
-                negate = text[Pos] == '-';
-                Pos++;
             }
             return terms;
         }
+
+        /// <summary>± or its ASCII spelling '+-' at the reading position.</summary>
+        private bool StartsSwitch(int end) => Pos < end && (text[Pos] == '±' || Peek(end, "+-"));
 
         private bool StartsNumber(int i, int end) => i < end && char.IsAsciiDigit(text[i]);
 
         private ValueExpr ParseAtom(int end)
         {
             if (Pos >= end) throw Fail("a value");
+            // A minus before any term but a number negates it; a run of them is read in a loop,
+            // not by recursion, so '- - - … x' cannot run the stack out.
+            int minuses = 0;
+            while (Pos < end && text[Pos] == '-' && !StartsNumber(Pos + 1, end))
+            {
+                minuses++;
+                Pos++;
+                SkipSpace(end);
+                if (Pos >= end) throw Fail("a value after '-'");
+            }
+            var atom = ParseSignlessAtom(end);
+            return minuses % 2 == 0 ? atom : new NegateExpr(atom);
+        }
+
+        private ValueExpr ParseSignlessAtom(int end)
+        {
             char c = text[Pos];
             if (c == '(')
             {
@@ -221,11 +329,12 @@ public static class ValueNotation
                 _references.Add(part);
                 return part;
             }
-            if (c == '±')
+            if (StartsSwitch(end))
             {
-                Pos++;
+                string sign = c == '±' ? "±" : "+-";
+                Pos += sign.Length;
                 SkipSpace(end);
-                var x = ParseNumber(end) ?? throw Fail("a number after '±'");
+                var x = ParseNumber(end) ?? throw Fail($"a number after '{sign}' (±x and its ASCII spelling +-x are {{x|-x}})");
                 return new SwitchExpr(x);
             }
             // number, then optional ups multiplier or star
@@ -234,7 +343,7 @@ public static class ValueNotation
             int ups = ParseUps(end, number, out bool multiplied);
             if (multiplied) number = null;
             int star = ParseStar(end, out bool hasStar);
-            if (number is null && ups == 0 && !hasStar) throw Fail("a value (number, *, ↑, ↓, ±x, '{' or '(')");
+            if (number is null && ups == 0 && !hasStar) throw Fail("a value (number, *, ↑, ↓, up, down, ±x or +-x, '{' or '(')");
             var x0 = number ?? Dyadic.Zero;
             if (ups == 0 && !hasStar) return new NumberExpr(x0);
             return new UpStarExpr(x0, ups, star);
@@ -254,6 +363,7 @@ public static class ValueNotation
             if (number is { } n)
             {
                 if (!n.IsInteger || n.Sign <= 0 || count != 1) { Pos--; throw Fail("a whole number of ups such as 3↑"); }
+                if (n.Numerator > MaxUps) { Pos = _numberStart; throw Fail($"at most {MaxUps:N0} ups in one term"); }
                 multiplied = true;
                 count = (int)n.Numerator;
             }
@@ -273,9 +383,13 @@ public static class ValueNotation
             return m;
         }
 
+        // Where the last number read began, for messages about what follows it.
+        private int _numberStart;
+
         private Dyadic? ParseNumber(int end)
         {
             int start = Pos;
+            _numberStart = start;
             if (Pos < end && text[Pos] == '-') Pos++;
             int digits = Pos;
             while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
@@ -287,6 +401,7 @@ public static class ValueNotation
                 while (Pos < end && char.IsAsciiDigit(text[Pos])) Pos++;
                 if (Pos == den) throw Fail("a denominator (a power of two)");
             }
+            else if (Pos + 1 < end && text[Pos] == '.' && char.IsAsciiDigit(text[Pos + 1])) throw DecimalPoint(start, end);
             var span = text.AsSpan(start, Pos - start);
             if (!Dyadic.TryParse(span, out var value))
             {
@@ -296,36 +411,49 @@ public static class ValueNotation
             return value;
         }
 
+        /// <summary>A decimal such as 1.5: the notation has fractions only, so say which one it is.</summary>
+        private ValueSyntaxException DecimalPoint(int start, int end)
+        {
+            int point = text.IndexOf('.', start);
+            int stop = point + 1;
+            while (stop < end && char.IsAsciiDigit(text[stop])) stop++;
+            string written = text[start..stop];
+            var whole = System.Numerics.BigInteger.Parse(text.AsSpan(start, point - start).ToString().Replace("-", "") + text[(point + 1)..stop]);
+            int places = stop - point - 1;
+            var ten = System.Numerics.BigInteger.Pow(10, places);
+            var gcd = System.Numerics.BigInteger.GreatestCommonDivisor(whole, ten);
+            var num = whole / gcd;
+            var den = ten / gcd;
+            bool dyadic = !den.IsZero && (den & (den - 1)).IsZero;
+            string sign = text[start] == '-' ? "-" : "";
+            Pos = start;
+            return Fail(dyadic
+                ? $"a fraction, not a decimal point: write {sign}{num}{(den.IsOne ? "" : "/" + den)} for {written}"
+                : $"a dyadic fraction (a whole number over a power of two, such as 3/8); {written} is not one");
+        }
+
         private int Matching(int open, int end, char o, char c)
         {
-            int depth = 0;
-            for (int i = open; i < end; i++)
+            int close = _partner[open];
+            if (close >= end)
             {
-                if (text[i] == '{' || text[i] == '(') depth++;
-                else if (text[i] == '}' || text[i] == ')')
-                {
-                    depth--;
-                    if (depth == 0)
-                    {
-                        if (text[i] != c) { Pos = i; throw Fail($"'{c}'"); }
-                        return i;
-                    }
-                }
+                // The partner lies beyond the stretch being read (a ',' '|' or ';' split it).
+                Pos = end;
+                throw Fail($"'{c}' to close the '{o}' at column {open + 1}");
             }
-            Pos = end;
-            throw Fail($"'{c}' to close the '{o}' at column {open + 1}");
+            return close;
         }
 
         /// <summary>The inside of braces, [start, end): split at the longest run of bars.</summary>
         private ValueExpr ParseBraced(int start, int end)
         {
-            int bestAt = -1, bestLen = 0, depth = 0;
+            Enter();
+            int bestAt = -1, bestLen = 0;
             for (int i = start; i < end; i++)
             {
                 char ch = text[i];
-                if (ch == '{' || ch == '(') depth++;
-                else if (ch == '}' || ch == ')') depth--;
-                else if (ch == '|' && depth == 0)
+                if (Opens(ch)) i = Past(i) - 1;
+                else if (ch == '|')
                 {
                     int j = i;
                     while (j < end && text[j] == '|') j++;
@@ -338,22 +466,14 @@ public static class ValueNotation
             if (bestAt < 0) { Pos = start; throw Fail("'|' between the Left and Right options"); }
             var left = ParseSide(start, bestAt);
             var right = ParseSide(bestAt + bestLen, end);
+            _depth--;
             return new OptionsExpr(left, right);
         }
 
         private IReadOnlyList<ValueExpr> ParseSide(int start, int end)
         {
             // A side that still holds bars is one game written without its own braces.
-            int depth = 0;
-            bool bars = false;
-            for (int i = start; i < end; i++)
-            {
-                char ch = text[i];
-                if (ch == '{' || ch == '(') depth++;
-                else if (ch == '}' || ch == ')') depth--;
-                else if (ch == '|' && depth == 0) bars = true;
-            }
-            if (bars) return [ParseBraced(start, end)];
+            if (NextAtThisLevel(start, end, '|') < end) return [ParseBraced(start, end)];
             var options = new List<ValueExpr>();
             Pos = start;
             SkipSpace(end);
@@ -371,21 +491,17 @@ public static class ValueNotation
             return options;
         }
 
-        private int NextComma(int from, int end)
-        {
-            int depth = 0;
-            for (int i = from; i < end; i++)
-            {
-                char ch = text[i];
-                if (ch == '{' || ch == '(') depth++;
-                else if (ch == '}' || ch == ')') depth--;
-                else if (ch == ',' && depth == 0) return i;
-            }
-            return end;
-        }
+        private int NextComma(int from, int end) => NextAtThisLevel(from, end, ',');
     }
 
     // ------------------------------------------------------------------ out
+
+    /// <summary>
+    /// Longest bar run written: an option that would need more bars is written in braces instead
+    /// (<c>{0|{0||||0|||0||0|0}}</c>), so a deep form's text grows linearly with its depth
+    /// rather than with its square.
+    /// </summary>
+    public const int MaxBars = 4;
 
     /// <summary>Longest written form printed in full; larger values are written with shared parts.</summary>
     public const int PlainLimit = 4000;
@@ -474,9 +590,9 @@ public static class ValueNotation
             if (store.TryGetUpStar(g, out var ux, out int n, out int m)) return (FormatUpStar(ux, n, m, ascii), 0);
             var left = store.LeftOptions(g);
             var right = store.RightOptions(g);
-            if (!ascii && left.Count == 1 && right.Count == 1 && store.TryGetNumber(left[0], out var a)
+            if (left.Count == 1 && right.Count == 1 && store.TryGetNumber(left[0], out var a)
                 && store.TryGetNumber(right[0], out var b) && a == -b && a.Sign > 0)
-                return ("±" + a, 0);
+                return ((ascii ? "+-" : "±") + a, 0);
             var (lt, lb) = Side(left);
             var (rt, rb) = Side(right);
             int bars = Math.Max(lb, rb) + 1;
@@ -485,7 +601,11 @@ public static class ValueNotation
 
         private (string Text, int Bars) Side(IReadOnlyList<Game> options)
         {
-            if (options.Count == 1 && nameOf(options[0]) is null) return Part(options[0]);
+            if (options.Count == 1 && nameOf(options[0]) is null)
+            {
+                var (text, bars) = Part(options[0]);
+                return bars < MaxBars ? (text, bars) : ("{" + text + "}", 0);
+            }
             return (string.Join(",", options.Select(o => nameOf(o) ?? Whole(o))), 0);
         }
     }
@@ -505,34 +625,100 @@ public static class ValueNotation
     }
 }
 
-/// <summary>Writes value expressions back as text, as written (no simplification).</summary>
+/// <summary>
+/// Writes value expressions back as text, as written (no simplification), into one buffer, so
+/// the work is linear in the length of the text however deep the expression nests.
+/// </summary>
 public static class ValueExprWriter
 {
-    public static string Write(ValueExpr expr, bool ascii = false) => expr switch
+    public static string Write(ValueExpr expr, bool ascii = false)
     {
-        NumberExpr n => n.Value.ToString(),
-        UpStarExpr u => WriteUpStar(u, ascii),
-        SwitchExpr s => ascii ? $"{{{s.X}|{-s.X}}}" : "±" + s.X,
-        OptionsExpr o => "{" + WriteInside(o, ascii) + "}",
-        SumExpr s => string.Join(" + ", s.Terms.Select(t => t is SumExpr ? "(" + Write(t, ascii) + ")" : Write(t, ascii))),
-        PartExpr p => "#" + p.Name,
-        SharedExpr s => "(" + Write(s.Body, ascii) + " where " + string.Join("; ", s.Parts.OrderBy(kv => kv.Key).Select(kv => $"#{kv.Key} = {Write(kv.Value, ascii)}")) + ")",
-        NegateExpr n => n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u && (u.X.IsZero || u.Ups == 0)) ? "-" + Write(n.Inner, ascii) : "-(" + Write(n.Inner, ascii) + ")",
-        _ => throw new ArgumentException($"unknown expression {expr}"),
-    };
-
-    private static string WriteInside(OptionsExpr o, bool ascii)
-    {
-        var (l, lb) = Side(o.Left, ascii);
-        var (r, rb) = Side(o.Right, ascii);
-        return l + new string('|', Math.Max(lb, rb) + 1) + r;
+        var sb = new StringBuilder();
+        new Writing(sb, ascii).Write(expr);
+        return sb.ToString();
     }
 
-    private static int Bars(OptionsExpr o) =>
-        Math.Max(o.Left is [OptionsExpr a] ? Bars(a) : 0, o.Right is [OptionsExpr b] ? Bars(b) : 0) + 1;
+    private sealed class Writing(StringBuilder sb, bool ascii)
+    {
+        // Bar counts of brace expressions, worked out once each (by reference: equal records may
+        // stand in different places).
+        private readonly Dictionary<OptionsExpr, int> _bars = new(ReferenceEqualityComparer.Instance);
 
-    private static (string, int) Side(IReadOnlyList<ValueExpr> options, bool ascii) =>
-        options is [OptionsExpr only] ? (WriteInside(only, ascii), Bars(only)) : (string.Join(",", options.Select(x => Write(x, ascii))), 0);
+        public void Write(ValueExpr expr)
+        {
+            switch (expr)
+            {
+                case NumberExpr n: sb.Append(n.Value.ToString()); break;
+                case UpStarExpr u: sb.Append(WriteUpStar(u, ascii)); break;
+                case SwitchExpr s: sb.Append(ascii ? "+-" : "±").Append(s.X.ToString()); break;
+                case OptionsExpr o: sb.Append('{'); Inside(o); sb.Append('}'); break;
+                case SumExpr s:
+                    for (int i = 0; i < s.Terms.Count; i++)
+                    {
+                        if (i > 0) sb.Append(" + ");
+                        if (s.Terms[i] is SumExpr) { sb.Append('('); Write(s.Terms[i]); sb.Append(')'); }
+                        else Write(s.Terms[i]);
+                    }
+                    break;
+                case PartExpr p: sb.Append('#').Append(p.Name); break;
+                case SharedExpr s:
+                    sb.Append('(');
+                    Write(s.Body);
+                    sb.Append(" where ");
+                    bool first = true;
+                    foreach (var kv in s.Parts.OrderBy(kv => kv.Key))
+                    {
+                        if (!first) sb.Append("; ");
+                        first = false;
+                        sb.Append('#').Append(kv.Key).Append(" = ");
+                        Write(kv.Value);
+                    }
+                    sb.Append(')');
+                    break;
+                case NegateExpr n:
+                    bool bare = n.Inner is NumberExpr or OptionsExpr || (n.Inner is UpStarExpr u2 && (u2.X.IsZero || u2.Ups == 0));
+                    sb.Append(bare ? "-" : "-(");
+                    Write(n.Inner);
+                    if (!bare) sb.Append(')');
+                    break;
+                default: throw new ArgumentException($"unknown expression {expr}");
+            }
+        }
+
+        /// <summary>The bars between o's sides: one more than the longest run written inside a side without braces.</summary>
+        private int Bars(OptionsExpr o)
+        {
+            if (_bars.TryGetValue(o, out int known)) return known;
+            int bars = Math.Max(SideBars(o.Left), SideBars(o.Right)) + 1;
+            _bars[o] = bars;
+            return bars;
+        }
+
+        /// <summary>The bar run a side brings: a lone brace option is written without braces while its run stays under <see cref="ValueNotation.MaxBars"/>.</summary>
+        private int SideBars(IReadOnlyList<ValueExpr> side) =>
+            side is [OptionsExpr only] && Bars(only) is var b && b < ValueNotation.MaxBars ? b : 0;
+
+        private void Inside(OptionsExpr o)
+        {
+            Side(o.Left);
+            sb.Append('|', Bars(o));
+            Side(o.Right);
+        }
+
+        private void Side(IReadOnlyList<ValueExpr> options)
+        {
+            if (options is [OptionsExpr only] && Bars(only) < ValueNotation.MaxBars)
+            {
+                Inside(only);
+                return;
+            }
+            for (int i = 0; i < options.Count; i++)
+            {
+                if (i > 0) sb.Append(',');
+                Write(options[i]);
+            }
+        }
+    }
 
     private static string WriteUpStar(UpStarExpr u, bool ascii)
     {

@@ -8,6 +8,6 @@ public sealed class ValueSyntaxException(string text, int column, string expecte
     public int Column { get; } = column;
     public string Expected { get; } = expected;
 
-    /// <summary>The text with a caret under the offending character, for people.</summary>
-    public string Pointer => $"{Text}\n{new string(' ', Math.Min(Column, Text.Length))}^ expected {Expected}";
+    /// <summary>The faulty line (a window of it around the fault, escaped) with a caret under the fault, for people.</summary>
+    public string Pointer => PrintableText.Caret(Text, Column, Expected);
 }

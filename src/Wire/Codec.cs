@@ -14,7 +14,7 @@ public readonly record struct Parsed<T>(T? Message, WireError? Error) where T : 
 
 /// <summary>
 /// The twine/1 codec: lines (without their terminator) to message records and back. Strict about
-/// the shape SPEC.md §4 fixes (single spaces, lower-case words, whole non-negative numbers), lenient
+/// the shape docs/protocol.md fixes (single spaces, lower-case words, whole non-negative numbers), lenient
 /// where it promises to be (unknown <c>key=value</c> pairs are ignored). Stateless and thread-safe.
 /// </summary>
 public static class Codec
@@ -49,7 +49,8 @@ public static class Codec
 
     private static Parsed<Request> ParseHello(List<Token> tokens)
     {
-        var (words, _) = Sort(tokens);
+        var (words, pairs) = Sort(tokens);
+        if (Twice(pairs) is { } twice) return twice;
         if (words.Count != 3 || words[1].Text != "twine")
             return Error(ErrorCodes.BadRequest, "expected 'hello twine 1'");
         if (!TryNumber(words[2].Text, out var version) || version > int.MaxValue)
@@ -72,7 +73,8 @@ public static class Codec
 
     private static Parsed<Request> ParseApply(List<Token> tokens)
     {
-        var (words, _) = Sort(tokens);
+        var (words, pairs) = Sort(tokens);
+        if (Twice(pairs) is { } twice) return twice;
         if (words.Count != 3) return Error(ErrorCodes.BadRequest, "expected 'apply <side> <move>'");
         if (ParseSide(words[1]) is not { } side) return SideError(words[1]);
         return new Parsed<Request>(new ApplyRequest(side, words[2].Text), null);
@@ -83,11 +85,11 @@ public static class Codec
         var (words, pairs) = Sort(tokens);
         if (words.Count != 2) return Error(ErrorCodes.BadRequest, "expected 'think <side> clock=<ms> inc=<ms>'");
         if (ParseSide(words[1]) is not { } side) return SideError(words[1]);
-        if (Duplicate(pairs) is { } twice) return Error(ErrorCodes.BadRequest, $"column {twice.Column + 1}: key {Quote(twice.Key)} given twice");
+        if (Twice(pairs) is { } twice) return twice;
         long? clock = null, inc = null;
         foreach (var pair in pairs)
         {
-            if (pair.Key is not ("clock" or "inc")) continue; // unknown keys are ignored (SPEC.md §4)
+            if (pair.Key is not ("clock" or "inc")) continue; // unknown keys are ignored (docs/protocol.md)
             if (!TryNumber(pair.Value, out var ms))
                 return Error(ErrorCodes.BadRequest, $"column {pair.Column + 1}: {pair.Key}= needs whole milliseconds, got {Quote(pair.Value)}");
             if (pair.Key == "clock") clock = ms; else inc = ms;
@@ -97,7 +99,8 @@ public static class Codec
 
     private static Parsed<Request> Bare(List<Token> tokens, Request request)
     {
-        var (words, _) = Sort(tokens);
+        var (words, pairs) = Sort(tokens);
+        if (Twice(pairs) is { } twice) return twice;
         if (words.Count != 1)
             return Error(ErrorCodes.BadRequest, $"column {words[1].Column + 1}: '{tokens[0].Text}' takes no arguments, got {Quote(words[1].Text)}");
         return new Parsed<Request>(request, null);
@@ -271,6 +274,10 @@ public static class Codec
         return null;
     }
 
+    /// <summary>A repeated key is a bad request on every request that takes keys (unknown keys included): which one would count is anyone's guess.</summary>
+    private static WireError? Twice(List<Pair> pairs) =>
+        Duplicate(pairs) is { } twice ? Error(ErrorCodes.BadRequest, $"column {twice.Column + 1}: key {Quote(twice.Key)} given twice") : null;
+
     private static string? Value(List<Pair> pairs, string key)
     {
         foreach (var pair in pairs)
@@ -288,7 +295,7 @@ public static class Codec
     private static WireError SideError(Token token) =>
         new(ErrorCodes.BadRequest, $"column {token.Column + 1}: expected a side, left or right, got {Quote(token.Text)}");
 
-    /// <summary>Whole non-negative numbers in plain digits, as SPEC.md writes milliseconds.</summary>
+    /// <summary>Whole non-negative numbers in plain digits, as the protocol writes milliseconds.</summary>
     private static bool TryNumber(string text, out long value)
     {
         value = 0;

@@ -1,7 +1,7 @@
 namespace Bramble.Wire;
 
 /// <summary>
-/// The codes of <c>err &lt;code&gt; &lt;text&gt;</c>. The first five come from SPEC.md §4; the rest are
+/// The codes of <c>err &lt;code&gt; &lt;text&gt;</c>. The first five are the protocol's own (docs/protocol.md); the rest are
 /// this engine's, documented in docs/protocol.md. A harness should treat any code it does not know
 /// as a plain failure of that request.
 /// </summary>
@@ -28,7 +28,7 @@ public static class ErrorCodes
     /// <summary><c>assess</c> could not reach an exact value within its budget.</summary>
     public const string NoValue = "no-value";
 
-    /// <summary>A harness-side code: an engine's line that is not a well-formed twine/1 reply (SPEC.md §6 uses the same word).</summary>
+    /// <summary>A harness-side code: an engine's line that is not a well-formed twine/1 reply (the journal's <c>end</c> uses the same word).</summary>
     public const string BadReply = "bad-reply";
 
     /// <summary>The engine itself failed while serving a well-formed request (a bug); it keeps serving.</summary>

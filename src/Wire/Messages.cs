@@ -2,7 +2,7 @@ using Bramble.Values;
 
 namespace Bramble.Wire;
 
-// The twine/1 messages of SPEC.md §4 as records. Moves and positions stay text here: the codec
+// The twine/1 messages of docs/protocol.md as records. Moves and positions stay text here: the codec
 // knows no ruleset, so a move is checked by the engine that holds the position, not by the parser.
 // Every record turns back into its line with Codec.Format.
 

@@ -87,6 +87,9 @@ public class AnalystTests
             }
             var review = analyst.Review(positions, first, "blue", "red", 5000);
             Assert.Equal(expected, review.Blunders.Select(b => b.Ply));
+            // Limited by nodes instead of time (in a fresh context), the review says the same.
+            Assert.Equal(review, analyst.Review(positions, first, "blue", "red", 0, nodes: 10_000_000) with { Blunders = review.Blunders });
+            Assert.Equal(expected, analyst.Review(positions, first, "blue", "red", 0, nodes: 10_000_000).Blunders.Select(b => b.Ply));
             Assert.All(review.Blunders, b => Assert.Equal((b.Ply % 2 == 1) == (first == Side.Left) ? "blue" : "red", b.By));
             Assert.Equal(positions.Count - 1, review.Analysed);
         }
@@ -109,5 +112,40 @@ public class AnalystTests
         var analyst = new Analyst(Serilog.Core.Logger.None);
         Assert.Null(analyst.Winner(s_rules.Parse("L3"), Side.Left, 0));
         Assert.Equal(new GameReview(null, [], 0), analyst.Review([s_rules.Parse("L3")], Side.Left, "a", "b", 0));
+    }
+
+    /// <summary>A seeded random blue-red-green stalk: its canonical form grows fast with its length (mixed ordinal sums).</summary>
+    private static IPosition MixedStalk(int edges, int seed)
+    {
+        var random = new Random(seed);
+        return Rulesets.Get("hackenbush").Parse(new string(Enumerable.Range(0, edges).Select(_ => "BRG"[random.Next(3)]).ToArray()));
+    }
+
+    [Fact]
+    public async Task TheBudgetHoldsOnALongMixedStalk()
+    {
+        // The value of a 1,000-edge mixed stalk takes minutes: before the store answered to the budget,
+        // this call did not come back. Generous time-out; the assertion is that it comes back at all.
+        var analyst = new Analyst(Serilog.Core.Logger.None);
+        var position = MixedStalk(1000, 7);
+        var call = DeepWork.RunAsync(() => analyst.Winner(position, Side.Left, 200));
+        // WaitAsync throws TimeoutException when the call does not come back.
+        await call.WaitAsync(TimeSpan.FromSeconds(60));
+        var review = DeepWork.RunAsync(() => analyst.Review([position, position], Side.Left, "a", "b", 200));
+        await review.WaitAsync(TimeSpan.FromSeconds(60));
+        // Afterwards the store is whole: small positions get the values plain search gives.
+        Assert.Equal(Side.Left, analyst.Winner(Rulesets.Get("hackenbush").Parse("BR + G"), Side.Left, 5000)); // BR + G = 1/2 + *, positive: Left wins (derived from the definitions)
+        Assert.Equal(Side.Right, analyst.Winner(Rulesets.Get("hackenbush").Parse("G + G"), Side.Left, 5000)); // * + * = 0: the mover loses (derived from the definitions)
+    }
+
+    [Fact]
+    public async Task ACancelStopsAnalysisAtOnce()
+    {
+        using var cancel = new CancellationTokenSource();
+        var analyst = new Analyst(Serilog.Core.Logger.None, cancel.Token);
+        var call = DeepWork.RunAsync(() => analyst.Winner(MixedStalk(1000, 11), Side.Left, long.MaxValue / 4));
+        await Task.Delay(100);
+        cancel.Cancel();
+        Assert.Null(await call.WaitAsync(TimeSpan.FromSeconds(30)));
     }
 }

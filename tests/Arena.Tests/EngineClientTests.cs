@@ -20,7 +20,7 @@ public class EngineClientTests
     public async Task HandshakeAndGameIgnoreUnknownKeys()
     {
         await using var client = EngineClient.Start(FixtureProgram.Launch());
-        // SPEC.md §4: unknown keys are ignored (the fixture adds colour= to welcome and spare= to ok).
+        // docs/protocol.md: unknown keys are ignored (the fixture adds colour= to welcome and spare= to ok).
         var welcome = await client.HelloAsync(s_reply);
         Assert.Equal("fixture-good", welcome.Name);
         Assert.Equal(["heaps"], welcome.Rulesets);

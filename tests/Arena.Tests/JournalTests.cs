@@ -27,7 +27,7 @@ public class JournalTests
     public void ALineHasTheSpecFieldsInOrder()
     {
         var line = JournalFormat.Write(Record(17) with { Position = "{3|-1} + ↑*" });
-        // SPEC.md §6: the field names and order of the journal line.
+        // docs/matches.md: the field names and order of the journal line.
         Assert.Equal("""{"game":17,"pair":["pruner","gardener"],"left":"pruner","right":"gardener","first":"right","ruleset":"heaps","position":"{3|-1} + ↑*","moves":[{"side":"right","move":"1.0","ms":41},{"side":"left","move":"2.1","ms":7}],"winner":"left","end":"no-move","theory":"left","blunders":[{"ply":2,"by":"gardener"}],"analysed":2}""", line);
     }
 

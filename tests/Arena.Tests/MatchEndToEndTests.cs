@@ -103,7 +103,7 @@ public class MatchEndToEndTests
             ruleset = "heaps",
             positions = new { file = "suites/garden.txt" },
             players,
-            format = "gauntlet",
+            format = "challenger",
             focus = "steady",
             seats = "swap",
             // Short enough that the stuck engines lose on time soon, long enough for the others on a busy machine.
@@ -215,14 +215,14 @@ public class MatchEndToEndTests
             players = new[] { Player("pruner", "--pick", "perfect"), Player("random", "--seed", "9") },
             seats = "swap",
             parallel = 2,
-            sprt = new { elo0 = 0, elo1 = 100, alpha = 0.05, beta = 0.05 },
+            sprt = new { null_elo = 0, alternative_elo = 100, alpha = 0.05, beta = 0.05 },
             analysis_ms = 0,
             journal = "j.jsonl",
         });
         var report = await RunAsync(spec);
         Assert.Equal(MatchStop.SprtDecided, report.Stop);
         Assert.True(report.Records.Count < report.Total);
-        Assert.Equal(SprtDecision.AcceptH1, report.Standings.Sprt!.Decision);
+        Assert.Equal(SprtDecision.Alternative, report.Standings.Sprt!.Decision);
         // The decision rests on what the journal holds: recomputing from the file gives the same.
         var again = MatchStandings.Compute(JournalFile.Read(report.JournalPath).Records, ["pruner", "random"], report.Spec.Sprt);
         Assert.Equal(report.Standings.Sprt.Llr, again.Sprt!.Llr, 12);
@@ -379,4 +379,42 @@ public class MatchEndToEndTests
             return 0;
         }
     }
+
+    [Fact]
+    public async Task ASeededMatchOfWorkLimitedPlayersWritesTheSameJournalAtAnyParallel()
+    {
+        using var folder = new TempFolder();
+        Suite(folder, "L2 + R2 + N3", "N4 + N2", "L1 + R3 + N1", "N3 + N3 + L2");
+        // Players that move at random: were their chance shared across the games an engine happens to
+        // play, the journal would depend on how the workers interleave the games.
+        var spec = folder.Spec(new
+        {
+            ruleset = "heaps",
+            positions = new { file = "suites/garden.txt" },
+            players = new[] { Player("hedger", "--pick", "random"), Player("weeder", "--pick", "random"), Player("mower", "--pick", "random") },
+            seats = "all-four",
+            seed = 11,
+            clock = new { base_ms = 20000, inc_ms = 100 },
+            journal = "results/seeded.jsonl",
+        });
+        var one = await RunAsync(spec, new MatchOptions { Parallel = 1 });
+        var journal = Path.Combine(folder.Path, "results", "seeded.jsonl");
+        var first = Comparable(journal);
+        File.Delete(journal);
+        var two = await RunAsync(spec, new MatchOptions { Parallel = 2 });
+        Assert.Equal(48, one.Records.Count);
+        Assert.Equal(48, two.Records.Count);
+        // Game for game and move for move, once sorted by game id and with the timings left out.
+        Assert.Equal(first, Comparable(journal));
+        // The games are not all alike (the seeds per game do differ): some position is played two ways.
+        Assert.True(one.Records.GroupBy(r => (r.Position, r.Left, r.Right, r.First)).Count() > 1);
+        Assert.True(one.Records.Select(r => string.Join(" ", r.Moves.Select(m => m.Move))).Distinct().Count() > 12);
+    }
+
+    /// <summary>The journal's lines sorted by game id, each without its per-move times.</summary>
+    private static List<string> Comparable(string journal) =>
+        JournalFile.Read(journal).Records
+            .OrderBy(r => r.Game)
+            .Select(r => JournalFormat.Write(r with { Moves = r.Moves.Select(m => m with { Ms = 0 }).ToList() }))
+            .ToList();
 }

@@ -23,7 +23,7 @@ public class MatchSpecLoaderTests
           "clock": { "base_ms": -5, "inc": 1 },
           "parallel": 0,
           "adjudicate": "sometimes",
-          "sprt": { "elo0": 10, "elo1": 5 },
+          "sprt": { "null_elo": 10, "alternative_elo": 5 },
           "colour": "blue"
         }
         """);
@@ -42,7 +42,7 @@ public class MatchSpecLoaderTests
         Assert.Contains("$.clock.inc", paths);
         Assert.Contains("$.parallel", paths);
         Assert.Contains("$.adjudicate", paths);
-        Assert.Contains("$.sprt.elo1", paths);
+        Assert.Contains("$.sprt.alternative_elo", paths);
         Assert.Contains("$.sprt", paths); // three players
         Assert.Contains("$.colour", paths);
         Assert.Contains("shell", e.Errors.Single(x => x.Path == "$.players[0].run").Message);
@@ -114,7 +114,7 @@ public class MatchSpecLoaderTests
                 new { generate = "random", count = 5, size = 4, seed = 9, ruleset = "heaps" },
             },
             players = new[] { Player("a"), Player("b") },
-            format = "gauntlet",
+            format = "challenger",
             focus = "b",
             seats = "swap",
         });
@@ -122,16 +122,16 @@ public class MatchSpecLoaderTests
         Assert.Equal(6, spec.Positions.Count);
         // Derived from the definitions: the generator is seeded, so the same spec gives the same positions.
         Assert.Equal(new HeapsRuleset().Generate("random", 5, 4, 9), spec.Positions.Skip(1).Select(p => p.Text));
-        Assert.Equal(TournamentFormat.Gauntlet, spec.Format);
+        Assert.Equal(TournamentFormat.Challenger, spec.Format);
         Assert.Equal("b", spec.Focus);
     }
 
     [Fact]
-    public void GauntletNeedsAFocusThatIsAPlayer()
+    public void ChallengerNeedsAFocusThatIsAPlayer()
     {
         using var folder = new TempFolder();
         folder.Write("s.txt", "L1\n");
-        var path = folder.Spec(new { ruleset = "heaps", positions = new { file = "s.txt" }, players = new[] { Player("a"), Player("b") }, format = "gauntlet", focus = "zed" });
+        var path = folder.Spec(new { ruleset = "heaps", positions = new { file = "s.txt" }, players = new[] { Player("a"), Player("b") }, format = "challenger", focus = "zed" });
         var e = Assert.Throws<MatchSpecException>(() => s_loader.Load(path));
         Assert.Equal("$.focus", Assert.Single(e.Errors).Path);
     }
@@ -156,11 +156,39 @@ public class MatchSpecLoaderTests
           "ruleset": "heaps",
           "positions": { "file": "s.txt" },
           "players": [ { "id": "a", "run": ["a"] }, { "id": "b", "run": ["b"], "settings": { "strategy": "hotstrat", "depth": 3 } }, ],
-          "sprt": { "elo0": 0, "elo1": 20 },
+          "sprt": { "null_elo": 0, "alternative_elo": 20 },
+          "seed": -3,
+          "analysis_nodes": 5000,
         }
         """);
         var spec = s_loader.Load(path);
+        Assert.Equal(-3, spec.Seed);
+        Assert.Equal(5000, spec.AnalysisNodes);
         Assert.Equal([new("strategy", "hotstrat"), new("depth", "3")], spec.Players[1].Settings);
         Assert.Equal(new SprtSpec(0, 20, 0.05, 0.05), spec.Sprt);
+    }
+
+    [Fact]
+    public void OldSpellingsAreAnsweredWithTheCurrentOnes()
+    {
+        using var folder = new TempFolder();
+        folder.Write("s.txt", "L1\n");
+        var path = folder.Write("old.json", """
+        {
+          "ruleset": "heaps",
+          "positions": { "file": "s.txt" },
+          "players": [ { "id": "a", "run": ["a"] }, { "id": "b", "run": ["b"] } ],
+          "format": "gauntlet",
+          "focus": "a",
+          "sprt": { "elo0": 0, "elo1": 20 }
+        }
+        """);
+        var e = Assert.Throws<MatchSpecException>(() => s_loader.Load(path));
+        // Each old spelling gets one message at its own JSON path, showing the new spelling; nothing else
+        // (no "missing null_elo" on top, no complaint about focus).
+        Assert.Equal(["$.format", "$.sprt.elo0", "$.sprt.elo1"], e.Errors.Select(x => x.Path).Order());
+        Assert.Contains("\"format\": \"challenger\"", e.Errors.Single(x => x.Path == "$.format").Message);
+        Assert.Contains("\"null_elo\": 0", e.Errors.Single(x => x.Path == "$.sprt.elo0").Message);
+        Assert.Contains("\"alternative_elo\": 20", e.Errors.Single(x => x.Path == "$.sprt.elo1").Message);
     }
 }

@@ -31,7 +31,7 @@ public class MatchVerbTests
         using var folder = new TempFolder();
         var spec = folder.Write("bad.json", """{ "ruleset": "hackenbush", "positions": { "file": "none.txt" }, "players": [ { "id": "a", "run": "bramble engine" } ], "seats": "three" }""");
         var (code, _, error) = Run(folder.Path, "match", spec);
-        // SPEC.md §5 and §7: every error at once with its JSON path; exit 2 for bad input.
+        // docs/matches.md and docs/cli.md: every error at once with its JSON path; exit 2 for bad input.
         Assert.Equal(2, code);
         Assert.Contains("$.positions.file", error);
         Assert.Contains("$.players[0].run", error);

@@ -32,9 +32,9 @@ public class SchedulerTests
     }
 
     [Fact]
-    public void GauntletPairsTheFocusWithEveryOtherPlayer()
+    public void ChallengerPairsTheFocusWithEveryOtherPlayer()
     {
-        var schedule = Scheduler.Build(Spec(4, 2, SeatPlan.Swap, TournamentFormat.Gauntlet, "p3"));
+        var schedule = Scheduler.Build(Spec(4, 2, SeatPlan.Swap, TournamentFormat.Challenger, "p3"));
         // Derived from the definitions: 3 opponents × 2 positions × 2 seatings, all involving p3.
         Assert.Equal(12, schedule.Count);
         Assert.All(schedule, g => Assert.Contains("p3", g.Pair));
@@ -45,7 +45,7 @@ public class SchedulerTests
     public void AllFourSeatsEachPlayerOnEachSideWithEachSideFirst()
     {
         var schedule = Scheduler.Build(Spec(2, 1, SeatPlan.AllFour));
-        // SPEC.md §5: each player as Left and as Right, each side moving first.
+        // docs/matches.md: each player as Left and as Right, each side moving first.
         Assert.Equal(4, schedule.Select(g => (g.Left, g.First)).Distinct().Count());
         Assert.All(schedule, g => Assert.NotEqual(g.Left, g.Right));
     }
@@ -56,7 +56,7 @@ public class SchedulerTests
         var schedule = Scheduler.Build(Spec(2, 4, SeatPlan.Swap));
         foreach (var pair in schedule.Chunk(2))
         {
-            // SPEC.md §5: two games, seats swapped, same side first.
+            // docs/matches.md: two games, seats swapped, same side first.
             Assert.Equal(pair[0].Left, pair[1].Right);
             Assert.Equal(pair[0].First, pair[1].First);
             Assert.Equal(pair[0].Position, pair[1].Position);

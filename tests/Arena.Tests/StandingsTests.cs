@@ -97,7 +97,7 @@ public class StandingsTests
             if (decided) decidedAt = i;
         }
         Assert.NotNull(decidedAt);
-        Assert.Equal(SprtDecision.AcceptH1, MatchStandings.Compute(records, ["a", "b"], spec).Sprt!.Decision);
+        Assert.Equal(SprtDecision.Alternative, MatchStandings.Compute(records, ["a", "b"], spec).Sprt!.Decision);
     }
 
     [Fact]
@@ -107,9 +107,13 @@ public class StandingsTests
         var table = StandingsText.Table(MatchStandings.Compute(records, ["pruner", "gardener"]), "Orchard");
         Assert.Contains("Orchard: 2 games", table);
         Assert.Contains("pruner", table);
-        Assert.Contains("+inf", table);
-        Assert.Contains("pentanomial", table);
+        // pruner won both games: no finite maximum-likelihood rating, so the table says the virtual games were used.
+        Assert.Contains("Bradley and Terry", table);
+        Assert.Contains("virtual win and loss", table);
         var json = StandingsJson.Write(MatchStandings.Compute(records, ["pruner", "gardener"]), "Orchard", []);
+        // The score against the field is still +inf (written null); the joint rating is finite and marked.
         Assert.Contains("\"elo\": null", json);
+        Assert.Contains("\"ratings_regularised\": true", json);
+        Assert.Contains("\"rating\": ", json);
     }
 }

@@ -7,7 +7,7 @@ public class StatisticsTests
     [Fact]
     public void TwoHundredEloIsAboutThreeQuartersExpectedScore()
     {
-        // Source: A. Elo, The Rating of Chessplayers (1978), logistic form; CHECKS.md §7: "200 points ≈ 0.76 expected score".
+        // Source: A. Elo, The Rating of Chessplayers (1978), logistic form; A. Elo 1978; A. Wald 1945: "200 points ≈ 0.76 expected score".
         Assert.Equal(0.76, Elo.ExpectedScore(200), 2);
         // Derived from the definitions: 1 / (1 + 10^(−1/2)).
         Assert.Equal(1.0 / (1.0 + Math.Pow(10, -0.5)), Elo.ExpectedScore(200), 12);
@@ -20,7 +20,7 @@ public class StatisticsTests
     [InlineData(0.9, 381.6970037757299)]
     public void ScoreMapsToEloByTheLogisticFormula(double score, double elo)
     {
-        // Source: A. Elo 1978, Δ = −400·log10(1/s − 1) (CHECKS.md §7); the figures derived from the definitions.
+        // Source: A. Elo 1978, Δ = −400·log10(1/s − 1) (A. Elo 1978; A. Wald 1945); the figures derived from the definitions.
         Assert.Equal(elo, Elo.FromScore(score), 9);
     }
 
@@ -113,7 +113,7 @@ public class StatisticsTests
     public void WaldBoundsAtFivePercentArePlusMinus2944()
     {
         // Source: A. Wald, "Sequential tests of statistical hypotheses", Ann. Math. Stat. 16 (1945);
-        // CHECKS.md §7: ±2.944 at α = β = 0.05.
+        // A. Elo 1978; A. Wald 1945: ±2.944 at α = β = 0.05.
         var bounds = SprtBounds.From(0.05, 0.05);
         Assert.Equal(-2.944, bounds.Lower, 3);
         Assert.Equal(2.944, bounds.Upper, 3);
@@ -185,8 +185,8 @@ public class StatisticsTests
     {
         // Source: A. Wald 1945 — H1 at LLR ≥ upper bound, H0 at LLR ≤ lower bound, else continue.
         var bounds = SprtBounds.From(0.05, 0.05);
-        Assert.Equal(SprtDecision.AcceptH1, bounds.Decide(2.95));
-        Assert.Equal(SprtDecision.AcceptH0, bounds.Decide(-2.95));
+        Assert.Equal(SprtDecision.Alternative, bounds.Decide(2.95));
+        Assert.Equal(SprtDecision.Null, bounds.Decide(-2.95));
         Assert.Equal(SprtDecision.Continue, bounds.Decide(2.9));
         Assert.Equal(SprtDecision.Continue, bounds.Decide(-2.9));
     }

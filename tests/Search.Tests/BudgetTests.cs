@@ -69,7 +69,7 @@ public class BudgetTests
     public void TemperaturePlayersSayWhenTheyReadAnEstimate()
     {
         // A 6×6 board is over the reader's exact size: its thermograph is an estimate. Two 2×2
-        // squares (±1 each, CHECKS.md §8) are valued exactly.
+        // squares (±1 each, published Domineering results (Lachmann, Moore, Rapaport; Bullock)) are valued exactly.
         foreach (var rule in new[] { TemperatureRule.Hotstrat, TemperatureRule.Thermostrat, TemperatureRule.Sentestrat })
         {
             var large = Domineering.Parse("6x6");
@@ -95,7 +95,7 @@ public class BudgetTests
     [Fact]
     public void TheSolverReportsABudgetedAnswerAsNotExact()
     {
-        // SPEC.md §7: `exact` is false when the search ran out of budget; then no winner is claimed.
+        // docs/cli.md: `exact` is false when the search ran out of budget; then no winner is claimed.
         var report = Solver.Solve(Domineering.Parse("7x7"), [Side.Left, Side.Right], new PerfectPlayer(), TimeSpan.FromMilliseconds(5));
         Assert.False(report.Exact);
         Assert.Null(report.Outcome);

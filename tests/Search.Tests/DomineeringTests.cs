@@ -13,7 +13,7 @@ public class DomineeringTests
     /// <summary>
     /// Empty rectangles (rows × columns) with the winner when Left (vertical) moves first and when
     /// Right does. Right moving first on m×n is Vertical moving first on n×m with the roles
-    /// swapped (CHECKS.md §8), so each row cites the result for both boards.
+    /// swapped (published Domineering results (Lachmann, Moore, Rapaport; Bullock)), so each row cites the result for both boards.
     /// </summary>
     public static TheoryData<string, Outcome, string> Rectangles => new()
     {
@@ -40,11 +40,11 @@ public class DomineeringTests
         { "6x3", Outcome.L, "Uiterwijk 2014" },
         { "3x6", Outcome.R, "Uiterwijk 2014" },
         // 5×6 won by Horizontal (m×2k, m = 5); 6×5 won by Vertical (2k×n, n = 5): Uiterwijk 2014.
-        // With Right first, 5×6 is Vertical first on 6×5 and so on (CHECKS.md §8).
+        // With Right first, 5×6 is Vertical first on 6×5 and so on (published Domineering results (Lachmann, Moore, Rapaport; Bullock)).
         { "5x6", Outcome.R, "Uiterwijk 2014" },
         { "6x5", Outcome.L, "Uiterwijk 2014" },
         // 5×5 is a second-player win and 6×6 a first-player win: from memory, the m×n table of
-        // Breuker, Uiterwijk, van den Herik, TCS 230 (2000) (CHECKS.md §8 cites the table).
+        // Breuker, Uiterwijk, van den Herik, TCS 230 (2000) (published Domineering results (Lachmann, Moore, Rapaport; Bullock) cites the table).
         { "5x5", Outcome.P, "from memory: Breuker et al. 2000" },
         { "6x6", Outcome.N, "from memory: Breuker et al. 2000" },
         // A vertical strip of n cells is ⌊n/2⌋ > 0 and a horizontal one −⌊n/2⌋: Wikipedia, "Domineering".

@@ -57,7 +57,7 @@ public class TemperatureStrategyTests
             {
                 var (loss, hottest) = PlayOut(start, rule, side, first, stops);
                 // Error bound of temperature play: within the largest component temperature of the optimal
-                // stop (CHECKS.md §6: Hanner 1959 for mean play; the Thermostrat statement [M], Winning Ways ch. 6).
+                // stop (Winning Ways ch. 6; Berlekamp 1996; Hanner 1959: Hanner 1959 for mean play; the Thermostrat statement [M], Winning Ways ch. 6).
                 Assert.True(loss <= hottest, $"{rule} as {side.Word()} ({first.Word()} first) on {start.Text}: lost {loss} > {hottest}");
                 Assert.True(loss.Sign >= 0, "the optimal opponent cannot do worse than the optimal stop");
             }
@@ -68,7 +68,7 @@ public class TemperatureStrategyTests
     [MemberData(nameof(Rules))]
     public void OnMullerLiSumsTheStrategyStaysWithinTheLargestTemperatureOfOptimal(TemperatureRule rule)
     {
-        // The random test sums of Müller & Li (CG 2004, CHECKS.md §6), smaller numbers: five
+        // The random test sums of Müller & Li (CG 2004, Winning Ways ch. 6; Berlekamp 1996; Hanner 1959), smaller numbers: five
         // components {a|b||c|d}, d = 0, c = d + rand, b = c + rand, a = b + rand.
         var rnd = new Random(800 + (int)rule);
         for (int i = 0; i < 20; i++)
@@ -85,7 +85,7 @@ public class TemperatureStrategyTests
             foreach (var first in new[] { Side.Left, Side.Right })
             {
                 var (loss, hottest) = PlayOut(start, rule, side, first, stops);
-                // Within the largest temperature of the optimal stop: CHECKS.md §6 (Hanner 1959; Thermostrat [M]).
+                // Within the largest temperature of the optimal stop: Winning Ways ch. 6; Berlekamp 1996; Hanner 1959 (Hanner 1959; Thermostrat [M]).
                 Assert.True(loss <= hottest, $"{rule} as {side.Word()} ({first.Word()} first) on {start.Text}: lost {loss} > {hottest}");
             }
         }
@@ -95,7 +95,7 @@ public class TemperatureStrategyTests
     [MemberData(nameof(Rules))]
     public void InAColdSumTheStrategyMakesTheCheapestMove(TemperatureRule rule)
     {
-        // Numbers 3, 1/2 and 5/4: temperatures −1, −1/2 and −1/4 (sub-zero convention, CHECKS.md §5).
+        // Numbers 3, 1/2 and 5/4: temperatures −1, −1/2 and −1/4 (sub-zero convention, Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994).
         // The cheapest move is Left's in 5/4 (to 1, losing 1/4): derived from the definitions.
         var trees = new Trees();
         var three = trees.Number(3);
@@ -112,7 +112,7 @@ public class TemperatureStrategyTests
     public void TheStrategyMovesInTheHottestOfTwoSwitches(TemperatureRule rule)
     {
         // {4|0} (temperature 2) beside {1|0} (temperature 1/2): every strategy plays in {4|0}, for
-        // either side (CHECKS.md §5 temperatures; the choice derived from the definitions).
+        // either side (Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994 temperatures; the choice derived from the definitions).
         var trees = new Trees();
         var hot = trees.Switch(4, 0);
         var position = trees.Sum(trees.Switch(1, 0), hot);

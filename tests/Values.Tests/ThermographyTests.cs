@@ -1,13 +1,13 @@
 namespace Bramble.Values.Tests;
 
-/// <summary>CHECKS.md §5: worked thermography values, derived from the definitions in Winning Ways ch. 6 and Berlekamp &amp; Wolfe, Mathematical Go (1994) pp. 50–51.</summary>
+/// <summary>Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994: worked thermography values, derived from the definitions in Winning Ways ch. 6 and Berlekamp &amp; Wolfe, Mathematical Go (1994) pp. 50–51.</summary>
 public class ThermographyTests
 {
     private readonly GameStore _store = new();
     private static Dyadic D(string s) => Dyadic.Parse(s);
 
     [Theory]
-    // game, temperature, mean, left stop, right stop — CHECKS.md §5 table (derived from the definitions).
+    // game, temperature, mean, left stop, right stop — Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994 table (derived from the definitions).
     [InlineData("{4|0}", "2", "2", "4", "0")]
     [InlineData("{1|0}", "1/2", "1/2", "1", "0")]
     [InlineData("{2||1|0}", "3/4", "5/4", "2", "1")]
@@ -26,7 +26,7 @@ public class ThermographyTests
     }
 
     [Theory]
-    // walls at sample temperatures: CHECKS.md §5, "walls for 0 ≤ t ≤ temperature" column (derived from the definitions).
+    // walls at sample temperatures: Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994, "walls for 0 ≤ t ≤ temperature" column (derived from the definitions).
     [InlineData("{4|0}", "1", "3", "1")]
     [InlineData("{2||1|0}", "1/4", "7/4", "1")]
     [InlineData("{2||1|0}", "5/8", "11/8", "9/8")]
@@ -48,13 +48,13 @@ public class ThermographyTests
     public void AboveTheTemperatureTheWallsAreTheMast()
     {
         var th = _store.Thermograph(_store.Parse("{8||4|0}"));
-        // mast at the mean 5 above temperature 3 (CHECKS.md §5, derived from the definitions)
+        // mast at the mean 5 above temperature 3 (Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994, derived from the definitions)
         Assert.Equal(D("5"), th.LeftWallAt(D("7")));
         Assert.Equal(D("5"), th.RightWallAt(D("100")));
     }
 
     [Theory]
-    // sub-zero convention (Siegel 2013; Berlekamp 1996) as CHECKS.md §5 fixes it for this project.
+    // sub-zero convention (Siegel 2013; Berlekamp 1996) as Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994 fixes it for this project.
     [InlineData("3", "-1")]
     [InlineData("-2", "-1")]
     [InlineData("0", "-1")]
@@ -70,7 +70,7 @@ public class ThermographyTests
     public void CoolingFourOverZero()
     {
         var g = _store.Parse("{4|0}");
-        // CHECKS.md §5 cooling: {4|0} cooled by 1 is {3|1}, by 2 is 2*, by more than 2 is 2 (derived from the definitions).
+        // Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994 cooling: {4|0} cooled by 1 is {3|1}, by 2 is 2*, by more than 2 is 2 (derived from the definitions).
         Assert.Equal(_store.Parse("{3|1}"), _store.Cool(g, D("1")));
         Assert.Equal(_store.Parse("2*"), _store.Cool(g, D("2")));
         Assert.Equal(_store.Parse("2"), _store.Cool(g, D("5/2")));
@@ -90,7 +90,7 @@ public class ThermographyTests
     public void StopsOfASumOfSwitches()
     {
         var sum = _store.Add(_store.Parse("{10|2}"), _store.Parse("{5|-5}"));
-        // CHECKS.md §5 sums (derived from the definitions): Left stop 7, Right stop 5; means add.
+        // Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994 sums (derived from the definitions): Left stop 7, Right stop 5; means add.
         Assert.Equal(D("7"), _store.LeftStop(sum));
         Assert.Equal(D("5"), _store.RightStop(sum));
         Assert.Equal(_store.Mean(_store.Parse("{10|2}")) + _store.Mean(_store.Parse("{5|-5}")), _store.Mean(sum));
@@ -112,7 +112,7 @@ public class ThermographyTests
     [Fact]
     public void TwoStepSwitchClosedForm()
     {
-        // CHECKS.md §5 closed form for {a||b|c} (derived from the definitions).
+        // Winning Ways ch. 6; Berlekamp & Wolfe, Mathematical Go, 1994 closed form for {a||b|c} (derived from the definitions).
         var rng = new Random(3);
         for (int i = 0; i < 300; i++)
         {

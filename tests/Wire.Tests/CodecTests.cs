@@ -2,7 +2,7 @@ using Bramble.Values;
 
 namespace Bramble.Wire.Tests;
 
-// The expected lines below are the shapes of SPEC.md §4 (the project's own protocol table).
+// The expected lines below are the shapes of docs/protocol.md (the project's own protocol table).
 public class CodecTests
 {
     public static TheoryData<string, Request> RequestLines => new()
@@ -105,6 +105,12 @@ public class CodecTests
     [InlineData("think left clock= inc=0", "bad-request")]
     [InlineData("think left clock=99999999999999999999 inc=0", "bad-request")]
     [InlineData("think left clock=1 clock=2", "bad-request")]
+    // docs/protocol.md: a repeated key is a bad request on every request, not only think.
+    [InlineData("assess depth=1 depth=2", "bad-request")]
+    [InlineData("hello twine 1 style=a style=b", "bad-request")]
+    [InlineData("halt why=a why=a", "bad-request")]
+    [InlineData("bye k=1 k=1", "bad-request")]
+    [InlineData("apply left e3 k=1 k=2", "bad-request")]
     [InlineData("think left extra clock=1", "bad-request")]
     [InlineData("halt now", "bad-request")]
     [InlineData("bye bye", "bad-request")]

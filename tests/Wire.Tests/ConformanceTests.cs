@@ -5,7 +5,7 @@ using Bramble.Values;
 namespace Bramble.Wire.Tests;
 
 // `bramble engine` as a child process, walked through every request and every error reply of
-// SPEC.md §4 with the Domineering ruleset. Board facts used below are derived from the definitions:
+// docs/protocol.md with the Domineering ruleset. Board facts used below are derived from the definitions:
 // on 3x3 Left's domino at a1 covers a1 and a2, so Right's a1 (a1 and b1) is then illegal.
 public class ConformanceTests
 {
@@ -73,7 +73,7 @@ public class ConformanceTests
         Assert.StartsWith("welcome ", engine.Ask("hello twine 1"));
         // Edge ids follow the text: BRR is e1 (blue), e2, e3 (red); GGG is e4, e5, e6.
         Assert.Equal("ok components=2", engine.Ask("begin hackenbush BRR + GGG"));
-        // BRR = 1/4 by the sign-expansion rule, GGG = *3 (CHECKS.md §2, §3); a positive number plus a nimber is positive.
+        // BRR = 1/4 by the sign-expansion rule, GGG = *3 (Winning Ways vol. 1 ch. 2; On Numbers and Games, §3); a positive number plus a nimber is positive.
         Assert.Equal("value 1/4*3 outcome=L", engine.Ask("assess"));
         Assert.StartsWith("err bad-move ", engine.Ask("apply right e1")); // a blue edge: a move for the wrong side
         Assert.StartsWith("err bad-move ", engine.Ask("apply left e9"));  // no such edge
@@ -81,7 +81,7 @@ public class ConformanceTests
         Assert.Equal("value 1/4 outcome=L", engine.Ask("assess"));
         Assert.StartsWith("err bad-move ", engine.Ask("apply right e5")); // fell with e4
         Assert.Equal("ok", engine.Ask("apply right e2"));
-        Assert.Equal("value 1 outcome=L", engine.Ask("assess"));          // B = 1 (CHECKS.md §2)
+        Assert.Equal("value 1 outcome=L", engine.Ask("assess"));          // B = 1 (Winning Ways vol. 1 ch. 2; On Numbers and Games)
         Assert.Equal("pick e1", engine.Ask("think left clock=1000 inc=10")); // the only edge left
         Assert.StartsWith("err out-of-order ", engine.Ask("think right clock=1000 inc=10")); // right moved last
         Assert.Equal("ok", engine.Ask("apply left e1"));

@@ -1,6 +1,6 @@
 namespace Bramble.Wire.Tests;
 
-// The host against SPEC.md §4, request by request, in process. Stalk values in the assess tests are
+// The host against docs/protocol.md, request by request, in process. Stalk values in the assess tests are
 // derived from the definitions: L = {0|} = 1, R = -1, LR = {0|1} = 1/2, LRR = {0|1/2,1} = 1/4.
 public class HostTests
 {

@@ -18,7 +18,7 @@ public class LineReaderTests
     public void SplitsOnNewlineAndAcceptsCarriageReturnNewline()
     {
         var lines = ReadAll(Utf8("hello twine 1\r\nbegin forms ↑ + *\nbye"));
-        // SPEC.md §4: lines end in \n, \r\n accepted; a last line without terminator still counts.
+        // docs/protocol.md: lines end in \n, \r\n accepted; a last line without terminator still counts.
         Assert.Equal(["hello twine 1", "begin forms ↑ + *", "bye"], lines.Select(l => l.Text));
     }
 

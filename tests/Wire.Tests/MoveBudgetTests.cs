@@ -29,7 +29,7 @@ public class MoveBudgetTests
     }
 
     [Theory]
-    [InlineData(10_000L, 100L, 30L, 300)]   // the clock of SPEC.md §5's example match
+    [InlineData(10_000L, 100L, 30L, 300)]   // the clock of docs/matches.md's example match
     [InlineData(10_000L, 0L, 5L, 100)]      // no increment: the overhead comes out of the base
     [InlineData(1_000L, 20L, 15L, 300)]
     [InlineData(200L, 10L, 4L, 300)]

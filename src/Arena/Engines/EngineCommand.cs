@@ -8,15 +8,19 @@ namespace Bramble.Arena.Engines;
 /// Turns a player's <c>run</c> argv into what is started. Nothing passes through a shell. A
 /// relative program path (one with a slash, like <c>./engines/mine</c>) is taken from the spec's
 /// folder, and the engine runs in that folder so its own relative arguments mean the same. An
-/// argv[0] of <c>bramble</c> that is not on PATH is this very program (SPEC.md §5), so the demo
+/// argv[0] of <c>bramble</c> that is not on PATH is this very program (docs/matches.md), so the demo
 /// runs from a fresh checkout.
 /// </summary>
 public static class EngineCommand
 {
-    public static EngineLaunch Resolve(PlayerSpec player, string folder, IReadOnlyList<string> self, string? path = null)
+    public static EngineLaunch Resolve(PlayerSpec player, string folder, IReadOnlyList<string> self, string? path = null, string? database = null)
     {
         var program = player.Run[0];
         var rest = player.Run.Skip(1);
+        // A built-in engine shares the match's database unless its run chose one itself.
+        if (database is not null && program == "bramble" && player.Run.Count > 1 && player.Run[1] == "engine"
+            && !player.Run.Any(a => a == "--db" || a.StartsWith("--db=", StringComparison.Ordinal)))
+            rest = rest.Concat(["--db", database]);
         IEnumerable<string> argv;
         if (program == "bramble" && FindOnPath(program, path ?? Environment.GetEnvironmentVariable("PATH")) is null)
             argv = self.Concat(rest);

@@ -12,7 +12,7 @@ namespace Bramble.Arena.Engines;
 /// The pool knows every process it started and kills every one of them (with its process tree)
 /// when it is disposed or <see cref="KillAll"/> is called, also in the middle of a game.
 /// </summary>
-public sealed class EnginePool(MatchSpec spec, IReadOnlyList<string> self, EngineTimeouts timeouts, ClientLimits limits, ILogger log) : IAsyncDisposable
+public sealed class EnginePool(MatchSpec spec, IReadOnlyList<string> self, EngineTimeouts timeouts, ClientLimits limits, ILogger log, string? database = null) : IAsyncDisposable
 {
     private readonly ConcurrentDictionary<string, ConcurrentBag<Engine>> _idle = new(StringComparer.Ordinal);
     private readonly ConcurrentDictionary<int, EngineClient> _live = new();
@@ -70,7 +70,7 @@ public sealed class EnginePool(MatchSpec spec, IReadOnlyList<string> self, Engin
 
     private async Task<Engine> StartAsync(PlayerSpec player, CancellationToken cancel)
     {
-        var launch = EngineCommand.Resolve(player, spec.Folder, self);
+        var launch = EngineCommand.Resolve(player, spec.Folder, self, database: database);
         var client = EngineClient.Start(launch, limits, line => log.Debug("{Player} stderr: {Line}", player.Id, line));
         _live[client.ProcessId] = client;
         Interlocked.Increment(ref _started);

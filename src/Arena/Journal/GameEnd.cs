@@ -1,6 +1,6 @@
 namespace Bramble.Arena.Journal;
 
-/// <summary>How a game ended (SPEC.md §6 <c>end</c>); the last four are forfeits by the losing engine.</summary>
+/// <summary>How a game ended (<c>end</c> in docs/matches.md); the last four are forfeits by the losing engine.</summary>
 public enum GameEnd
 {
     /// <summary>The loser had no legal move.</summary>

@@ -9,7 +9,7 @@ public sealed record PlayedMove(Side Side, string Move, long Ms);
 public sealed record Blunder(int Ply, string By);
 
 /// <summary>
-/// One finished game, as one journal line (SPEC.md §6). Beyond the SPEC fields the line carries
+/// One finished game, as one journal line (docs/matches.md, "Journal"). Beyond the first fields the line carries
 /// <c>ruleset</c> (a match may mix rulesets), <c>analysed</c> (how many plies the exact analysis
 /// could judge, so blunder rates have an honest denominator) and, for forfeits, <c>detail</c>
 /// (what the engine did wrong).

@@ -16,39 +16,71 @@ public sealed record JournalContents(IReadOnlyList<GameRecord> Records, string? 
 /// Reads a journal. A harness killed in the middle of a write leaves at most one incomplete line,
 /// at the very end and without its newline: that line is ignored and reported. Any other line
 /// that is not a game record means the file was damaged or edited, and is an error naming the line.
+/// The file is read a line at a time and no line may be longer than <see cref="MaxLineBytes"/>, so
+/// a file that is no journal at all (a device such as /dev/zero, a large binary) is refused after
+/// reading at most that much, not read to the end of memory.
 /// </summary>
 public static class JournalFile
 {
+    /// <summary>The longest journal line read: far above any game's (a position line is at most 1 MiB).</summary>
+    public const int MaxLineBytes = 16 * 1024 * 1024;
+
     public static JournalContents Read(string path)
     {
+        if (Directory.Exists(path)) throw new JournalFormatException($"{path} is a folder, not a journal");
         if (!File.Exists(path)) return JournalContents.Empty;
-        var bytes = File.ReadAllBytes(path);
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite, 1 << 16);
         var records = new List<GameRecord>();
-        var start = 0;
+        var line = new MemoryStream();
+        var buffer = new byte[1 << 16];
+        long start = 0, offset = 0;
         var number = 0;
-        while (start < bytes.Length)
+        int count;
+        while ((count = stream.Read(buffer)) > 0)
         {
-            number++;
-            var newline = Array.IndexOf(bytes, (byte)'\n', start);
-            var end = newline < 0 ? bytes.Length : newline;
-            var text = Encoding.UTF8.GetString(bytes, start, end - start).TrimEnd('\r');
-            if (text.Trim().Length > 0)
+            var from = 0;
+            while (from < count)
             {
-                try
-                {
-                    records.Add(JournalFormat.Parse(text));
-                }
-                catch (JournalFormatException e)
-                {
-                    if (newline >= 0)
-                        throw new JournalFormatException($"{path} line {number}: {e.Message}");
-                    var notice = $"{path} line {number}: an incomplete last line ({end - start} bytes, left by an interrupted write) was ignored";
-                    return new JournalContents(records, notice, start, false);
-                }
+                var newline = Array.IndexOf(buffer, (byte)'\n', from, count - from);
+                var end = newline < 0 ? count : newline;
+                if (line.Length + (end - from) > MaxLineBytes)
+                    throw new JournalFormatException($"{path} line {number + 1}: longer than {MaxLineBytes / (1024 * 1024)} MiB: not a journal line");
+                line.Write(buffer, from, end - from);
+                offset += end - from;
+                if (newline < 0) break;
+                number++;
+                offset++;
+                Parse(path, number, line, records, complete: true);
+                line.SetLength(0);
+                start = offset;
+                from = newline + 1;
             }
-            if (newline < 0) return new JournalContents(records, null, bytes.Length, text.Trim().Length > 0);
-            start = newline + 1;
         }
-        return new JournalContents(records, null, bytes.Length, false);
+        if (line.Length == 0) return new JournalContents(records, null, offset, false);
+        number++;
+        if (Parse(path, number, line, records, complete: false)) return new JournalContents(records, null, offset, true);
+        if (Text(line).Trim().Length == 0) return new JournalContents(records, null, offset, false);
+        var notice = $"{path} line {number}: an incomplete last line ({line.Length} bytes, left by an interrupted write) was ignored";
+        return new JournalContents(records, notice, start, false);
+    }
+
+    private static string Text(MemoryStream line) =>
+        Encoding.UTF8.GetString(line.GetBuffer(), 0, (int)line.Length).TrimEnd('\r');
+
+    /// <summary>Adds the line's record; false for a last line without newline that is not one (blank lines are skipped).</summary>
+    private static bool Parse(string path, int number, MemoryStream line, List<GameRecord> records, bool complete)
+    {
+        var text = Text(line);
+        if (text.Trim().Length == 0) return complete;
+        try
+        {
+            records.Add(JournalFormat.Parse(text));
+            return true;
+        }
+        catch (JournalFormatException e)
+        {
+            if (complete) throw new JournalFormatException($"{path} line {number}: {e.Message}");
+            return false;
+        }
     }
 }

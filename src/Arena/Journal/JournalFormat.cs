@@ -10,7 +10,7 @@ namespace Bramble.Arena.Journal;
 public sealed class JournalFormatException(string message) : FormatException(message);
 
 /// <summary>
-/// A game record as one JSON line and back, with the SPEC.md §6 field order (people read these
+/// A game record as one JSON line and back, with the field order of docs/matches.md (people read these
 /// files). Non-ASCII stays readable (<c>↑</c>, not <c>\u2191</c>); the line never contains a
 /// newline, so one line is exactly one game.
 /// </summary>

@@ -22,9 +22,9 @@ public sealed class JournalWriter : IDisposable
     /// </summary>
     public static JournalWriter Open(string path, JournalContents contents)
     {
-        var folder = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(path));
-        if (!string.IsNullOrEmpty(folder)) Directory.CreateDirectory(folder);
-        var stream = new FileStream(path, FileMode.OpenOrCreate, FileAccess.ReadWrite, FileShare.Read);
+        // Unbuffered: every line goes out in one write of its own, and a failed write (a full disk)
+        // leaves nothing behind in a buffer for a later flush to push after it.
+        var stream = new FileStream(path, FileMode.OpenOrCreate, FileAccess.ReadWrite, FileShare.Read, bufferSize: 0);
         try
         {
             if (stream.Length > contents.ValidBytes) stream.SetLength(contents.ValidBytes);
@@ -52,6 +52,16 @@ public sealed class JournalWriter : IDisposable
 
     public void Dispose()
     {
-        lock (_gate) _stream.Dispose();
+        lock (_gate)
+        {
+            try
+            {
+                _stream.Dispose();
+            }
+            catch (IOException)
+            {
+                // Nothing is buffered; a device that fails on close has already failed a write, and that was reported.
+            }
+        }
     }
 }

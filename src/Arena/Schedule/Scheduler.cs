@@ -5,7 +5,7 @@ namespace Bramble.Arena.Schedule;
 
 /// <summary>
 /// Lays out every game of a match in a fixed order and numbers them from 1: for each position (in
-/// suite order), for each pair (round-robin: every pair in spec order; gauntlet: the focus against
+/// suite order), for each pair (round-robin: every pair in spec order; challenger: the focus against
 /// each other player), the seatings. The two games of a seat-swapped pair are neighbours, so a run
 /// that stops early (or an SPRT decision) leaves few half pairs.
 /// </summary>
@@ -29,7 +29,7 @@ public static class Scheduler
     {
         var ids = spec.Players.Select(p => p.Id).ToList();
         var pairs = new List<(string, string)>();
-        if (spec.Format == TournamentFormat.Gauntlet)
+        if (spec.Format == TournamentFormat.Challenger)
         {
             foreach (var id in ids)
                 if (id != spec.Focus) pairs.Add((spec.Focus!, id));

@@ -1,6 +1,6 @@
 namespace Bramble.Arena.Spec;
 
-/// <summary>A loaded, checked match specification (SPEC.md §5). Paths are absolute.</summary>
+/// <summary>A loaded, checked match specification (docs/matches.md). Paths are absolute.</summary>
 public sealed record MatchSpec
 {
     public required string Title { get; init; }
@@ -17,7 +17,7 @@ public sealed record MatchSpec
 
     public TournamentFormat Format { get; init; } = TournamentFormat.RoundRobin;
 
-    /// <summary>The player every game of a gauntlet involves.</summary>
+    /// <summary>The player every game of a challenger match involves.</summary>
     public string? Focus { get; init; }
 
     public SeatPlan Seats { get; init; } = SeatPlan.AllFour;
@@ -33,8 +33,20 @@ public sealed record MatchSpec
 
     public required string JournalPath { get; init; }
 
+    /// <summary>
+    /// When set, every player is sent <c>set seed</c> before each game, with a seed made from this one,
+    /// the game's id and the player's id (<see cref="Schedule.GameSeed"/>); null sends none.
+    /// </summary>
+    public long? Seed { get; init; }
+
     /// <summary>Budget of the exact analysis behind <c>theory</c> and <c>blunders</c>, per game; 0 turns it off.</summary>
     public int AnalysisMs { get; init; } = 1000;
+
+    /// <summary>
+    /// When set, the analysis behind <c>theory</c> and <c>blunders</c> is limited to this many nodes
+    /// per game (in a fresh value context) instead of <see cref="AnalysisMs"/>: the same on every run.
+    /// </summary>
+    public long? AnalysisNodes { get; init; }
 
     /// <summary>Budget of each adjudication check.</summary>
     public int AdjudicateMs { get; init; } = 100;
@@ -49,9 +61,9 @@ public sealed record PlayerSpec(string Id, IReadOnlyList<string> Run, IReadOnlyL
 /// <summary>A start position with its ruleset and where it came from (for messages).</summary>
 public sealed record StartPosition(string Ruleset, string Text, string Source);
 
-public enum TournamentFormat { RoundRobin, Gauntlet }
+public enum TournamentFormat { RoundRobin, Challenger }
 
-/// <summary>How each pair meets on each position (SPEC.md §5 <c>seats</c>).</summary>
+/// <summary>How each pair meets on each position (<c>seats</c> in docs/matches.md).</summary>
 public enum SeatPlan
 {
     /// <summary>Each player as Left and as Right, each side moving first: four games.</summary>
@@ -65,12 +77,15 @@ public enum Adjudication { Never, Decided, Numbers }
 /// <summary>Base time plus increment per side, in milliseconds, kept by the harness.</summary>
 public readonly record struct TimeControl(long BaseMs, long IncMs);
 
-/// <summary>Wald's test of H0: Δ = elo0 against H1: Δ = elo1 for the first player against the second.</summary>
-public sealed record SprtSpec(double Elo0, double Elo1, double Alpha, double Beta);
+/// <summary>
+/// Wald's test of the null hypothesis Δ = <paramref name="NullElo"/> against the alternative
+/// Δ = <paramref name="AlternativeElo"/>, Δ being the first player's rating over the second's.
+/// </summary>
+public sealed record SprtSpec(double NullElo, double AlternativeElo, double Alpha, double Beta);
 
 public static class SpecWords
 {
-    public static string Word(this TournamentFormat format) => format == TournamentFormat.Gauntlet ? "gauntlet" : "round-robin";
+    public static string Word(this TournamentFormat format) => format == TournamentFormat.Challenger ? "challenger" : "round-robin";
     public static string Word(this SeatPlan seats) => seats == SeatPlan.Swap ? "swap" : "all-four";
 
     public static string Word(this Adjudication adjudication) => adjudication switch

@@ -4,7 +4,7 @@ using Bramble.Rules;
 namespace Bramble.Arena.Spec;
 
 /// <summary>
-/// Reads a match spec (SPEC.md §5) and checks all of it before anything runs: every problem is
+/// Reads a match spec (docs/matches.md) and checks all of it before anything runs: every problem is
 /// collected with its JSON path and reported together in one <see cref="MatchSpecException"/>, so
 /// a user fixes a file in one go rather than one error per run. Positions are parsed with their
 /// ruleset here, so a typing mistake in line 90 of a suite stops the match before game 1.
@@ -14,8 +14,20 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
     private static readonly string[] s_topKeys =
     [
         "title", "ruleset", "positions", "players", "format", "focus", "seats", "clock", "parallel",
-        "adjudicate", "sprt", "journal", "analysis_ms", "adjudicate_ms",
+        "adjudicate", "sprt", "journal", "analysis_ms", "adjudicate_ms", "seed", "analysis_nodes",
     ];
+
+    // Spellings of earlier versions, answered with the current one rather than "unknown".
+    private static readonly Dictionary<string, string> s_renamedSprtKeys = new(StringComparer.Ordinal)
+    {
+        ["elo0"] = "null_elo",
+        ["elo1"] = "alternative_elo",
+    };
+
+    private static readonly Dictionary<string, string> s_renamedWords = new(StringComparer.Ordinal)
+    {
+        ["gauntlet"] = "challenger",
+    };
 
     private static readonly JsonDocumentOptions s_json = new()
     {
@@ -29,7 +41,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
         string text;
         try
         {
-            text = File.ReadAllText(full);
+            text = BoundedFile.ReadText(full, BoundedFile.SpecBytes);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -91,12 +103,12 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             var positions = Positions(root, ruleset);
 
             var format = Choice(root, "format", "$", TournamentFormat.RoundRobin,
-                ("round-robin", TournamentFormat.RoundRobin), ("gauntlet", TournamentFormat.Gauntlet));
+                ("round-robin", TournamentFormat.RoundRobin), ("challenger", TournamentFormat.Challenger));
             var focus = OptionalString(root, "focus", "$");
-            if (format == TournamentFormat.Gauntlet && focus is null)
-                Error("$.focus", "a gauntlet needs \"focus\": the id of the player who meets every other");
-            if (format != TournamentFormat.Gauntlet && focus is not null)
-                Error("$.focus", "\"focus\" only goes with \"format\": \"gauntlet\"");
+            if (format == TournamentFormat.Challenger && focus is null)
+                Error("$.focus", "a challenger match needs \"focus\": the id of the player who meets every other");
+            if (format != TournamentFormat.Challenger && focus is not null)
+                Error("$.focus", "\"focus\" only goes with \"format\": \"challenger\"");
             if (focus is not null && players.Count > 0 && players.All(p => p.Id != focus))
                 Error("$.focus", $"'{focus}' is not a player id (players: {string.Join(", ", players.Select(p => p.Id))})");
 
@@ -111,6 +123,8 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             var journal = OptionalString(root, "journal", "$") ?? Path.Combine("results", Path.GetFileNameWithoutExtension(specPath) + ".jsonl");
             var analysisMs = OptionalInteger(root, "analysis_ms", "$", min: 0, max: 3_600_000) ?? 1000;
             var adjudicateMs = OptionalInteger(root, "adjudicate_ms", "$", min: 1, max: 3_600_000) ?? 100;
+            var seed = OptionalInteger(root, "seed", "$", long.MinValue, long.MaxValue);
+            var analysisNodes = OptionalInteger(root, "analysis_nodes", "$", min: 1, max: 1_000_000_000_000);
 
             if (Errors.Count > 0) return null;
             return new MatchSpec
@@ -130,6 +144,8 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
                 JournalPath = Path.GetFullPath(Path.Combine(folder, journal)),
                 AnalysisMs = (int)analysisMs,
                 AdjudicateMs = (int)adjudicateMs,
+                Seed = seed,
+                AnalysisNodes = analysisNodes,
             };
         }
 
@@ -283,6 +299,9 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             else Generated(source, path, ruleset, positions);
         }
 
+        /// <summary>Errors listed for one suite file before the rest of it is skipped.</summary>
+        private const int MaxSuiteErrors = 5;
+
         private void SuiteFile(JsonElement source, string path, string? ruleset, List<StartPosition> positions)
         {
             foreach (var key in new[] { "count", "size", "seed", "colours" })
@@ -293,7 +312,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             string text;
             try
             {
-                text = File.ReadAllText(full);
+                text = BoundedFile.ReadText(full, BoundedFile.SuiteBytes);
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
@@ -302,8 +321,17 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             }
             var lines = SuiteLine.Split(text);
             if (lines.Count == 0) Error(path + ".file", $"'{file}' holds no positions");
+            var before = Errors.Count;
             foreach (var line in lines)
             {
+                // A file that is not a suite at all (a path typed wrong, or a match file from someone
+                // else pointing at a private file) would otherwise be echoed line by line.
+                if (Errors.Count - before >= MaxSuiteErrors)
+                {
+                    var failing = lines.Count(l => l.Number >= line.Number);
+                    Error(path + ".file", $"'{file}': {failing} more line{(failing == 1 ? "" : "s")} not checked; is it a position suite?");
+                    break;
+                }
                 var where = $"{file} line {line.Number}";
                 var name = line.Ruleset ?? ruleset;
                 if (name is null)
@@ -402,17 +430,23 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             if (!root.TryGetProperty("sprt", out var value) || value.ValueKind == JsonValueKind.Null) return null;
             if (value.ValueKind != JsonValueKind.Object)
             {
-                Error("$.sprt", $"expected {{ \"elo0\", \"elo1\", \"alpha\", \"beta\" }}, found {Kind(value)}");
+                Error("$.sprt", $"expected {{ \"null_elo\", \"alternative_elo\", \"alpha\", \"beta\" }}, found {Kind(value)}");
                 return null;
             }
-            UnknownKeys(value, "$.sprt", ["elo0", "elo1", "alpha", "beta"]);
-            var elo0 = RequiredNumber(value, "elo0", "$.sprt", -2000, 2000);
-            var elo1 = RequiredNumber(value, "elo1", "$.sprt", -2000, 2000);
+            UnknownKeys(value, "$.sprt", ["null_elo", "alternative_elo", "alpha", "beta"], s_renamedSprtKeys);
+            // A key written in its old spelling has had its message already; "missing" would only repeat it.
+            double? Hypothesis(string key) =>
+                !value.TryGetProperty(key, out _) && s_renamedSprtKeys.Any(r => r.Value == key && value.TryGetProperty(r.Key, out _))
+                    ? null
+                    : RequiredNumber(value, key, "$.sprt", -2000, 2000);
+            var nullElo = Hypothesis("null_elo");
+            var alternativeElo = Hypothesis("alternative_elo");
             var alpha = OptionalNumber(value, "alpha", "$.sprt", 1e-9, 0.5) ?? 0.05;
             var beta = OptionalNumber(value, "beta", "$.sprt", 1e-9, 0.5) ?? 0.05;
-            if (elo0 is not null && elo1 is not null && elo1 <= elo0) Error("$.sprt.elo1", $"must be greater than elo0 ({elo0})");
+            if (nullElo is not null && alternativeElo is not null && alternativeElo <= nullElo)
+                Error("$.sprt.alternative_elo", $"must be greater than null_elo ({nullElo})");
             if (playerCount != 2) Error("$.sprt", $"a sequential test compares exactly two players; this match has {playerCount}");
-            return elo0 is null || elo1 is null ? null : new SprtSpec(elo0.Value, elo1.Value, alpha, beta);
+            return nullElo is null || alternativeElo is null ? null : new SprtSpec(nullElo.Value, alternativeElo.Value, alpha, beta);
         }
 
         private T Choice<T>(JsonElement obj, string key, string path, T fallback, params (string Word, T Value)[] choices)
@@ -421,14 +455,23 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
             if (word is null) return fallback;
             foreach (var (w, v) in choices)
                 if (w == word) return v;
+            if (s_renamedWords.TryGetValue(word, out var renamed) && choices.Any(c => c.Word == renamed))
+            {
+                Error($"{path}.{key}", $"'{word}' is now called '{renamed}': write \"{key}\": \"{renamed}\"");
+                // Read on as the new word, so that fields depending on it are not also reported.
+                return choices.First(c => c.Word == renamed).Value;
+            }
             Error($"{path}.{key}", $"'{word}' is not one of {string.Join(", ", choices.Select(c => c.Word))}");
             return fallback;
         }
 
-        private void UnknownKeys(JsonElement obj, string path, string[] known)
+        private void UnknownKeys(JsonElement obj, string path, string[] known, IReadOnlyDictionary<string, string>? renamed = null)
         {
             foreach (var property in obj.EnumerateObject())
-                if (!known.Contains(property.Name))
+                if (known.Contains(property.Name)) continue;
+                else if (renamed is not null && renamed.TryGetValue(property.Name, out var now))
+                    Error($"{path}.{property.Name}", $"this field is now called \"{now}\": write \"{now}\": {property.Value.GetRawText()}");
+                else
                     Error($"{path}.{property.Name}", $"unknown field (known here: {string.Join(", ", known)})");
         }
 
@@ -497,7 +540,7 @@ public sealed class MatchSpecLoader(RulesetFinder rulesets)
         private string UnknownRuleset(string name)
         {
             var known = Rulesets.All.Select(r => r.Name).ToList();
-            return $"unknown ruleset '{name}'" + (known.Count > 0 ? $" (known: {string.Join(", ", known)})" : "");
+            return $"unknown ruleset '{(name.Length > 40 ? name[..40] + "…" : name)}'" + (known.Count > 0 ? $" (known: {string.Join(", ", known)})" : "");
         }
 
         private static string Kind(JsonElement value) => value.ValueKind switch

@@ -6,10 +6,13 @@ using Bramble.Values;
 namespace Bramble.Arena.Standings;
 
 /// <summary>
-/// The standings of a set of game records (SPEC.md §6), computed from the records alone so that a
+/// The standings of a set of game records (docs/matches.md), computed from the records alone so that a
 /// finished match, its journal and the merge of its shards all give the same table.
 /// </summary>
-public sealed record MatchStandings(IReadOnlyList<PlayerStanding> Players, int Games, SprtResult? Sprt)
+/// <param name="Players">Strongest first: by joint rating, then score.</param>
+/// <param name="Ratings">The joint ratings, with intervals and likelihoods of superiority.</param>
+/// <param name="Crosstable">The score of each pair, players in the order of <paramref name="Players"/>.</param>
+public sealed record MatchStandings(IReadOnlyList<PlayerStanding> Players, int Games, SprtResult? Sprt, RatingTable Ratings, Crosstable Crosstable)
 {
     /// <param name="playerOrder">Players to list (those without games too), e.g. the spec's; null: every player in the records.</param>
     /// <param name="sprt">The test to evaluate for the first player of <paramref name="playerOrder"/> against the second.</param>
@@ -17,17 +20,19 @@ public sealed record MatchStandings(IReadOnlyList<PlayerStanding> Players, int G
     {
         var ids = playerOrder?.ToList() ?? records.SelectMany(r => r.Pair).Distinct().ToList();
         var pairs = SeatPairs.Find(records);
+        var ratings = RatingTable.Compute(records, ids, pairs);
         var players = ids.Select(id => Standing(id, records, pairs))
             .OrderByDescending(p => p.Games > 0)
+            .ThenByDescending(p => ratings.Of(p.Id)?.Rating ?? 0)
             .ThenByDescending(p => p.Score)
             .ThenByDescending(p => p.Wins)
             .ThenBy(p => ids.IndexOf(p.Id))
             .ToList();
         var test = sprt is not null && ids.Count == 2 ? Test(sprt, ids[0], ids[1], records, pairs) : null;
-        return new MatchStandings(players, records.Count, test);
+        return new MatchStandings(players, records.Count, test, ratings, Crosstable.Compute(records, players.Select(p => p.Id).ToList()));
     }
 
-    /// <summary>The player ahead on score (with at least one game), or null before any game.</summary>
+    /// <summary>The player at the top of the table (with at least one game), or null before any game.</summary>
     public PlayerStanding? Leader => Players.FirstOrDefault(p => p.Games > 0);
 
     private static PlayerStanding Standing(string id, IReadOnlyList<GameRecord> records, IReadOnlyList<(GameRecord First, GameRecord Second)> pairs)
@@ -69,13 +74,13 @@ public sealed record MatchStandings(IReadOnlyList<PlayerStanding> Players, int G
         if (between.Count > 0)
         {
             var counts = between.Aggregate(new PentanomialCounts(), (c, p) => c.Add(p.First.ScoreOf(candidate) + p.Second.ScoreOf(candidate)));
-            var llr = Statistics.Sprt.LlrPentanomial(counts, spec.Elo0, spec.Elo1);
+            var llr = Statistics.Sprt.LlrPentanomial(counts, spec.NullElo, spec.AlternativeElo);
             if (!double.IsNaN(llr))
                 return new SprtResult(spec, candidate, baseline, llr, bounds, bounds.Decide(llr), ScoreModel.Pentanomial, counts.Pairs);
         }
         var games = records.Where(r => r.Pair.Contains(candidate) && r.Pair.Contains(baseline)).ToList();
         var wins = games.Count(g => g.WinnerId == candidate);
-        var single = Statistics.Sprt.LlrBernoulli(wins, games.Count - wins, spec.Elo0, spec.Elo1);
+        var single = Statistics.Sprt.LlrBernoulli(wins, games.Count - wins, spec.NullElo, spec.AlternativeElo);
         return new SprtResult(spec, candidate, baseline, single, bounds, bounds.Decide(single), ScoreModel.Trinomial, games.Count);
     }
 }

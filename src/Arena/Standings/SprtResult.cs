@@ -1,3 +1,4 @@
+using System.Globalization;
 using Bramble.Arena.Spec;
 using Bramble.Arena.Statistics;
 
@@ -8,8 +9,10 @@ public sealed record SprtResult(SprtSpec Spec, string Candidate, string Baseline
 {
     public string DecisionText => Decision switch
     {
-        SprtDecision.AcceptH1 => $"H1 accepted: {Candidate} is at least {Spec.Elo1:0.#} Elo stronger than {Baseline} (at the test's error rates)",
-        SprtDecision.AcceptH0 => $"H0 accepted: {Candidate} is not {Spec.Elo1:0.#} Elo stronger than {Baseline}; it is nearer {Spec.Elo0:0.#}",
+        SprtDecision.Alternative => string.Create(CultureInfo.InvariantCulture,
+            $"the test chose the alternative, Δ = {Spec.AlternativeElo:0.#} Elo for {Candidate} over {Baseline} rather than {Spec.NullElo:0.#}, at error rates alpha {Spec.Alpha}, beta {Spec.Beta}"),
+        SprtDecision.Null => string.Create(CultureInfo.InvariantCulture,
+            $"the test chose the null hypothesis, Δ = {Spec.NullElo:0.#} Elo for {Candidate} over {Baseline} rather than {Spec.AlternativeElo:0.#}, at error rates alpha {Spec.Alpha}, beta {Spec.Beta}"),
         _ => "no decision yet",
     };
 }

@@ -9,7 +9,10 @@ namespace Bramble.Arena.Standings;
 /// <summary>
 /// The standings as JSON (<c>--json</c>): <c>{"title","games","players":[{"id","games","wins",
 /// "losses","score","elo","elo_low","elo_high","elo_model","forfeits","blunders","moves_analysed",
-/// "blunders_per_100"}],"sprt":{…}|null,"notes":[…]}</c>. Infinite Elo values are written as null.
+/// "blunders_per_100","rating","rating_low","rating_high","los_next"}],"ratings_regularised",
+/// "crosstable":[{"player","opponent","wins","games"}],"sprt":{…}|null,"notes":[…]}</c>. Infinite
+/// Elo values are written as null. <c>elo</c> is each player against the opponents it met;
+/// <c>rating</c> is the joint fit (see <see cref="RatingTable"/>).
 /// </summary>
 public static class StandingsJson
 {
@@ -34,6 +37,14 @@ public static class StandingsJson
                 Finite(json, "elo_low", p.Games == 0 ? double.NaN : p.Elo.Low);
                 Finite(json, "elo_high", p.Games == 0 ? double.NaN : p.Elo.High);
                 json.WriteString("elo_model", p.Elo.Model.Word());
+                if (standings.Ratings.Of(p.Id) is { } r)
+                {
+                    Finite(json, "rating", r.Rating);
+                    Finite(json, "rating_low", r.Low);
+                    Finite(json, "rating_high", r.High);
+                    if (r.Superiority is { } los) json.WriteNumber("los_next", Math.Round(los, 6));
+                    else json.WriteNull("los_next");
+                }
                 json.WriteNumber("forfeits", p.Forfeits);
                 json.WriteNumber("blunders", p.Blunders);
                 json.WriteNumber("moves_analysed", p.MovesAnalysed);
@@ -41,13 +52,29 @@ public static class StandingsJson
                 json.WriteEndObject();
             }
             json.WriteEndArray();
+            json.WriteBoolean("ratings_regularised", standings.Ratings.Regularised);
+            json.WriteStartArray("crosstable");
+            var table = standings.Crosstable;
+            for (var i = 0; i < table.Players.Count; i++)
+                for (var j = 0; j < table.Players.Count; j++)
+                {
+                    var (wins, games) = table.Cell(i, j);
+                    if (i == j || games == 0) continue;
+                    json.WriteStartObject();
+                    json.WriteString("player", table.Players[i]);
+                    json.WriteString("opponent", table.Players[j]);
+                    json.WriteNumber("wins", wins);
+                    json.WriteNumber("games", games);
+                    json.WriteEndObject();
+                }
+            json.WriteEndArray();
             if (standings.Sprt is { } sprt)
             {
                 json.WriteStartObject("sprt");
                 json.WriteString("candidate", sprt.Candidate);
                 json.WriteString("baseline", sprt.Baseline);
-                json.WriteNumber("elo0", sprt.Spec.Elo0);
-                json.WriteNumber("elo1", sprt.Spec.Elo1);
+                json.WriteNumber("null_elo", sprt.Spec.NullElo);
+                json.WriteNumber("alternative_elo", sprt.Spec.AlternativeElo);
                 json.WriteNumber("alpha", sprt.Spec.Alpha);
                 json.WriteNumber("beta", sprt.Spec.Beta);
                 Finite(json, "llr", sprt.Llr);
@@ -55,8 +82,8 @@ public static class StandingsJson
                 json.WriteNumber("upper", Math.Round(sprt.Bounds.Upper, 6));
                 json.WriteString("decision", sprt.Decision switch
                 {
-                    SprtDecision.AcceptH0 => "H0",
-                    SprtDecision.AcceptH1 => "H1",
+                    SprtDecision.Null => "null",
+                    SprtDecision.Alternative => "alternative",
                     _ => "continue",
                 });
                 json.WriteString("model", sprt.Model.Word());

@@ -1,24 +1,31 @@
 namespace Bramble.Arena.Statistics;
 
 /// <summary>What a sequential test says so far.</summary>
-public enum SprtDecision { Continue, AcceptH0, AcceptH1 }
+public enum SprtDecision
+{
+    Continue,
+    /// <summary>The test chose the null hypothesis (Δ = null_elo) at its error rates.</summary>
+    Null,
+    /// <summary>The test chose the alternative (Δ = alternative_elo) at its error rates.</summary>
+    Alternative,
+}
 
 /// <summary>Wald's stopping bounds on the log-likelihood ratio.</summary>
 public readonly record struct SprtBounds(double Lower, double Upper)
 {
     /// <summary>
-    /// A. Wald, "Sequential tests of statistical hypotheses", Ann. Math. Stat. 16 (1945): accept H1
-    /// once LLR ≥ ln((1−β)/α), accept H0 once LLR ≤ ln(β/(1−α)).
+    /// A. Wald, "Sequential tests of statistical hypotheses", Ann. Math. Stat. 16 (1945): choose the
+    /// alternative once LLR ≥ ln((1−β)/α), the null hypothesis once LLR ≤ ln(β/(1−α)).
     /// </summary>
     public static SprtBounds From(double alpha, double beta) =>
         new(Math.Log(beta / (1.0 - alpha)), Math.Log((1.0 - beta) / alpha));
 
     public SprtDecision Decide(double llr) =>
-        llr >= Upper ? SprtDecision.AcceptH1 : llr <= Lower ? SprtDecision.AcceptH0 : SprtDecision.Continue;
+        llr >= Upper ? SprtDecision.Alternative : llr <= Lower ? SprtDecision.Null : SprtDecision.Continue;
 }
 
 /// <summary>
-/// Wald's sequential probability ratio test of H0: Δ = elo0 against H1: Δ = elo1 (A. Wald 1945),
+/// Wald's sequential probability ratio test of the null hypothesis Δ = elo0 against the alternative Δ = elo1 (A. Wald 1945),
 /// with the hypotheses turned into expected scores by the logistic model (A. Elo 1978).
 /// </summary>
 public static class Sprt

@@ -11,7 +11,7 @@ public static class BenchVerb
     public static Command Build()
     {
         var quick = new Option<bool>("--quick") { Description = "Fewer, smaller cases and a lower node cap (under a minute)" };
-        var json = new Option<bool>("--json") { Description = "Print the SPEC.md §7 JSON instead of the table" };
+        var json = new Option<bool>("--json") { Description = "Print JSON instead of the table (fields in docs/cli.md)" };
         var command = new Command("bench", "Decomposition search against whole-board alpha-beta, side by side") { quick, json };
         command.SetAction(parse => Failures.Guard(() =>
         {

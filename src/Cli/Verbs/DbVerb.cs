@@ -8,7 +8,7 @@ using Serilog;
 namespace Bramble.Cli;
 
 /// <summary>
-/// <c>bramble db build &lt;ruleset&gt; --cells N --out FILE</c> and <c>bramble db info FILE</c>:
+/// <c>bramble db build &lt;ruleset&gt; --size N --out FILE</c> and <c>bramble db info FILE</c>:
 /// precompute a component-value database, and say what one holds (docs/database.md).
 /// </summary>
 public static class DbVerb
@@ -24,10 +24,16 @@ public static class DbVerb
     private static Command BuildCommand()
     {
         var ruleset = new Argument<string>("ruleset") { Description = "domineering (regions up to N cells) or hackenbush (pieces up to N edges)" };
-        var cells = new Option<int>("--cells") { Description = "Largest component size to precompute (cells, or edges for hackenbush)", Required = true };
+        var size = new Option<int?>("--size") { Description = "Largest component size to precompute: cells for domineering, edges for hackenbush" };
+        // The first spelling, kept working for scripts but not shown: it read wrong for edges.
+        var cells = new Option<int?>("--cells") { Description = "Old spelling of --size", Hidden = true };
         var output = new Option<FileInfo>("--out") { Description = "Database file to write (merged with it when it already is one)", Required = true };
-        var command = new Command("build", "Precompute the values of every component up to a size") { ruleset, cells, output };
-        command.SetAction(parse => Failures.Guard(() => RunBuild(parse.GetValue(ruleset)!, parse.GetValue(cells), parse.GetValue(output)!)));
+        var command = new Command("build", "Precompute the values of every component up to a size") { ruleset, size, cells, output };
+        command.SetAction(parse => Failures.Guard(() =>
+        {
+            int n = parse.GetValue(size) ?? parse.GetValue(cells) ?? throw new InputException("db build: --size N is required (cells for domineering, edges for hackenbush)");
+            return RunBuild(parse.GetValue(ruleset)!, n, parse.GetValue(output)!);
+        }));
         return command;
     }
 
@@ -54,7 +60,7 @@ public static class DbVerb
         }
         if (size < 1 || size > catalogue.MaxCatalogueSize)
         {
-            Console.Error.WriteLine($"error: --cells must be between 1 and {catalogue.MaxCatalogueSize} for {ruleset.Name}, not {size}");
+            Console.Error.WriteLine($"error: --size must be between 1 and {catalogue.MaxCatalogueSize} for {ruleset.Name}, not {size}");
             return Entry.BadInput;
         }
 

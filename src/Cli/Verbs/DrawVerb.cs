@@ -6,22 +6,22 @@ using Bramble.Values;
 namespace Bramble.Cli;
 
 /// <summary>
-/// <c>bramble draw &lt;ruleset&gt; &lt;position&gt; --out FILE.svg</c> and
+/// <c>bramble draw &lt;ruleset&gt; &lt;position&gt; --out FILE.svg</c> (<c>--out -</c>: stdout) and
 /// <c>bramble draw thermograph &lt;value&gt; --out FILE.svg</c>.
 /// </summary>
 public static class DrawVerb
 {
     public static Command Build()
     {
-        var what = new Argument<string>("ruleset") { Description = "hackenbush, domineering, forms, or thermograph" };
+        var what = new Argument<string>("ruleset") { Description = RulesetNames.Listed + ", or thermograph" };
         var position = new Argument<string>("position") { Description = "position text (or a value for thermograph), @file, or -" };
-        var output = new Option<FileInfo>("--out") { Description = "SVG file to write", Required = true };
+        var output = new Option<string>("--out") { Description = "SVG file to write, or - for stdout", Required = true };
         var command = new Command("draw", "Draw a position or a thermograph as SVG") { what, position, output };
         command.SetAction(parse => Failures.Guard(() =>
         {
             var kind = parse.GetValue(what)!;
             var text = PositionInput.Read(parse.GetValue(position)!);
-            var file = parse.GetValue(output)!;
+            var target = parse.GetValue(output)!;
             string svg = BigStack.Run(() =>
             {
                 if (kind.Equals("thermograph", StringComparison.OrdinalIgnoreCase))
@@ -34,6 +34,12 @@ public static class DrawVerb
                     $"unknown ruleset '{kind}'; known: {string.Join(", ", Rulesets.All.Select(r => r.Name).Append("thermograph"))}");
                 return PositionPicture.Draw(rules.Parse(text));
             });
+            if (target == "-")
+            {
+                Console.Out.Write(svg);
+                return Entry.Success;
+            }
+            var file = new FileInfo(target);
             try
             {
                 File.WriteAllText(file.FullName, svg);

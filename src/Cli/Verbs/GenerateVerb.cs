@@ -11,7 +11,7 @@ public static class GenerateVerb
 {
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "hackenbush, domineering or forms" };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var generator = new Argument<string>("generator") { Description = "hackenbush: stalks, trees, graphs, mixed; domineering: rectangles, regions, sums; forms: switches, hot, hot-extra, mixed" };
         var count = new Option<int>("--count") { Description = "how many positions", DefaultValueFactory = _ => 1 };
         var size = new Option<int>("--size") { Description = "size of each position (edges, cells or terms; see docs/)", DefaultValueFactory = _ => 8 };

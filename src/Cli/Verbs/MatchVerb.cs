@@ -5,6 +5,8 @@ using Bramble.Arena.Journal;
 using Bramble.Arena.Schedule;
 using Bramble.Arena.Spec;
 using Bramble.Arena.Standings;
+using Bramble.Cli.Report;
+using Bramble.Rules;
 using Serilog;
 
 namespace Bramble.Cli;
@@ -22,15 +24,19 @@ public static class MatchVerb
     {
         var spec = new Argument<string?>("spec") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
         var resume = new Option<bool>("--resume") { Description = "Continue the journal, skipping the games it holds" };
-        var shard = new Option<string?>("--shard") { Description = "Play only the games whose id ≡ K (mod N), into a journal of their own" };
+        var shard = new Option<string?>("--shard") { Description = "K/N: play only the games whose id ≡ K (mod N), into a journal of their own (e.g. 0/4)", HelpName = "K/N" };
         var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)" };
         var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
+        var createFolders = new Option<bool>("--create-folders") { Description = "Let the match make its journal's folder even outside the match file's folder" };
         var command = new Command("match", "Play a tournament between engines and print the standings (a match file runs the programs it names)")
         {
-            spec, resume, shard, parallel, json,
+            spec, resume, shard, parallel, json, createFolders,
         };
+        command.Options.Add(DbOption.Option);
         command.Subcommands.Add(BuildMerge());
-        command.SetAction(parse => Run(parse.GetValue(spec), parse.GetValue(resume), parse.GetValue(shard), parse.GetValue(parallel), parse.GetValue(json)));
+        command.Subcommands.Add(BuildReport());
+        command.SetAction(parse => Run(parse.GetValue(spec), parse.GetValue(resume), parse.GetValue(shard), parse.GetValue(parallel), parse.GetValue(json),
+            parse.GetValue(createFolders), parse.GetValue(DbOption.Option)));
         return command;
     }
 
@@ -44,7 +50,7 @@ public static class MatchVerb
         return command;
     }
 
-    private static int Run(string? specPath, bool resume, string? shardText, int? parallel, bool json)
+    private static int Run(string? specPath, bool resume, string? shardText, int? parallel, bool json, bool createFolders, FileInfo? db)
     {
         var demo = specPath is null;
         if (demo)
@@ -72,11 +78,34 @@ public static class MatchVerb
         try
         {
             spec = new MatchSpecLoader(RulesetFinders.Registry).Load(specPath!);
+            // The demo that travels with an installed program writes its journal where the user
+            // is, not into the program's folder.
+            if (demo && !FoundFromWorkingFolder(specPath!))
+                spec = spec with { JournalPath = Path.GetFullPath(Path.Combine("results", "demo.jsonl")) };
         }
         catch (MatchSpecException e)
         {
             Console.Error.WriteLine(e.Message);
             return Entry.BadInput;
+        }
+
+        if (db is not null)
+        {
+            // Checked before any engine starts, so a bad file is a bad-input exit rather than a broken match.
+            try
+            {
+                DbOption.Load(db, new ValueContext());
+            }
+            catch (InputException e)
+            {
+                Console.Error.WriteLine($"match: {e.Message}");
+                return Entry.BadInput;
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                Console.Error.WriteLine($"match: --db {db}: {e.Message}");
+                return Entry.BadInput;
+            }
         }
 
         using var cancel = new CancellationTokenSource();
@@ -102,6 +131,8 @@ public static class MatchVerb
             Fresh = demo && !resume,
             Shard = shard,
             Parallel = parallel,
+            CreateFolders = createFolders,
+            Database = db?.FullName,
             Progress = progress,
             Log = Log.Logger,
         };
@@ -139,39 +170,103 @@ public static class MatchVerb
         }
     }
 
-    private static int Merge(string[] journals, bool json, string? output)
+    private static Command BuildReport()
+    {
+        var journals = new Argument<string[]>("journals") { Description = "Journals of one match (e.g. its shards)", Arity = ArgumentArity.OneOrMore };
+        var output = new Option<string>("--out") { Description = "The HTML file to write", Required = true };
+        var specFile = new Option<string?>("--spec") { Description = "The match file: its title, player order and SPRT (the journal does not carry them)" };
+        var command = new Command("report", "Write one self-contained HTML page about a match: standings, ratings, crosstable, SPRT, positions, blunders, games")
+        {
+            journals, output, specFile,
+        };
+        command.SetAction(parse => WriteReport(parse.GetValue(journals) ?? [], parse.GetValue(output)!, parse.GetValue(specFile)));
+        return command;
+    }
+
+    private static int WriteReport(string[] journals, string output, string? specPath)
+    {
+        if (ReadAndMerge(journals, "match report") is not var (records, _)) return Entry.BadInput;
+        MatchSpec? spec = null;
+        if (specPath is not null)
+        {
+            try
+            {
+                spec = new MatchSpecLoader(RulesetFinders.Registry).Load(specPath);
+            }
+            catch (MatchSpecException e)
+            {
+                Console.Error.WriteLine(e.Message);
+                return Entry.BadInput;
+            }
+        }
+        var title = spec?.Title ?? $"Match report: {string.Join(", ", journals.Select(Path.GetFileName))}";
+        var page = ReportPage.Render(title, records, spec?.Sprt, spec?.Players.Select(p => p.Id).ToList());
+        try
+        {
+            File.WriteAllText(output, page);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            Console.Error.WriteLine($"match report: cannot write {output}: {e.Message}");
+            return Entry.JobFailed;
+        }
+        Console.Error.WriteLine($"match report: {records.Count} games, written to {output}");
+        return Entry.Success;
+    }
+
+    /// <summary>The games of the journals, merged by id; null (after saying why) when a journal is missing, damaged or contradicts another.</summary>
+    private static (IReadOnlyList<GameRecord> Records, IReadOnlyList<string> Notices)? ReadAndMerge(string[] journals, string verb)
     {
         var read = new List<(string, JournalContents)>();
         foreach (var path in journals)
         {
             if (!File.Exists(path))
             {
-                Console.Error.WriteLine($"match merge: no such journal: {path}");
-                return Entry.BadInput;
+                Console.Error.WriteLine($"{verb}: no such journal: {path}");
+                return null;
             }
+            JournalContents contents;
             try
             {
-                read.Add((path, JournalFile.Read(path)));
+                contents = JournalFile.Read(path);
             }
             catch (JournalFormatException e)
             {
-                Console.Error.WriteLine($"match merge: {e.Message}");
+                Console.Error.WriteLine($"{verb}: {e.Message}");
+                return null;
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                Console.Error.WriteLine($"match merge: cannot read {path}: {e.Message}");
                 return Entry.BadInput;
             }
+            // Text with no game record in it at all (its one line unreadable) is some other file, not a journal cut short.
+            if (contents.Records.Count == 0 && contents.Notice is not null)
+            {
+                Console.Error.WriteLine($"match merge: {path} is not a journal: it holds no game record");
+                return Entry.BadInput;
+            }
+            read.Add((path, contents));
         }
         var merged = JournalMerge.Merge(read);
-        foreach (var note in merged.Notices) Console.Error.WriteLine($"match merge: {note}");
+        foreach (var note in merged.Notices) Console.Error.WriteLine($"{verb}: {note}");
         if (merged.Conflicts.Count > 0)
         {
-            foreach (var conflict in merged.Conflicts) Console.Error.WriteLine($"match merge: {conflict}");
-            Console.Error.WriteLine($"match merge: {merged.Conflicts.Count} game{(merged.Conflicts.Count == 1 ? " was" : "s were")} recorded with different results; no standings");
-            return Entry.BadInput;
+            foreach (var conflict in merged.Conflicts) Console.Error.WriteLine($"{verb}: {conflict}");
+            Console.Error.WriteLine($"{verb}: {merged.Conflicts.Count} game{(merged.Conflicts.Count == 1 ? " was" : "s were")} recorded with different results; no standings");
+            return null;
         }
+        return (merged.Records, merged.Notices);
+    }
+
+    private static int Merge(string[] journals, bool json, string? output)
+    {
+        if (ReadAndMerge(journals, "match merge") is not var (records, notices)) return Entry.BadInput;
         if (output is not null)
         {
             try
             {
-                File.WriteAllLines(output, merged.Records.Select(JournalFormat.Write));
+                File.WriteAllLines(output, records.Select(JournalFormat.Write));
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
@@ -179,10 +274,18 @@ public static class MatchVerb
                 return Entry.JobFailed;
             }
         }
-        var standings = MatchStandings.Compute(merged.Records);
+        var standings = MatchStandings.Compute(records);
         var title = $"merge of {journals.Length} journal{(journals.Length == 1 ? "" : "s")}";
-        Console.Out.Write(json ? StandingsJson.Write(standings, title, merged.Notices) + "\n" : StandingsText.Table(standings, title));
+        Console.Out.Write(json ? StandingsJson.Write(standings, title, notices) + "\n" : StandingsText.Table(standings, title));
         return Entry.Success;
+    }
+
+    /// <summary>True when the demo file sits in matches/ of the working folder or of one above it (a checkout).</summary>
+    private static bool FoundFromWorkingFolder(string demoPath)
+    {
+        var root = Path.GetDirectoryName(Path.GetDirectoryName(Path.GetFullPath(demoPath)))!;
+        var here = Path.GetFullPath(Directory.GetCurrentDirectory());
+        return here == root || here.StartsWith(root.TrimEnd(Path.DirectorySeparatorChar) + Path.DirectorySeparatorChar, StringComparison.Ordinal);
     }
 
     /// <summary>matches/demo.json from the working folder upward, then from the program's folder upward (a fresh checkout).</summary>
@@ -241,7 +344,8 @@ public static class MatchVerb
             var line = Format(_last!);
             if (inPlace)
             {
-                error.Write("\r" + line.PadRight(_width));
+                SafeWriter.CarriageReturn(error);
+                error.Write(line.PadRight(_width));
                 _width = Math.Max(_width, line.Length);
             }
             else error.WriteLine(line);
@@ -252,9 +356,9 @@ public static class MatchVerb
 
         public static string Format(MatchProgress p)
         {
-            var left = p.TimeLeft is { } t ? (t.TotalHours >= 1 ? $"{(int)t.TotalHours}h{t.Minutes:00}m" : $"{t.Minutes}m{t.Seconds:00}s") : "?";
+            var left = p.TimeLeft is { } t ? (t.TotalHours >= 1 ? $"{(int)t.TotalHours}h{t.Minutes:00}m left" : $"{t.Minutes}m{t.Seconds:00}s left") : "time left: estimating";
             var leader = p.Leader is { } l ? $"{l.Id} {100 * l.Score:0}%" : "-";
-            return $"games {p.Done}/{p.Total} · {p.GamesPerMinute:0.0}/min · {left} left · leader {leader}";
+            return $"games {p.Done}/{p.Total} · {p.GamesPerMinute:0.0}/min · {left} · leader {leader}";
         }
     }
 }

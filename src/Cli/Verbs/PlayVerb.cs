@@ -21,7 +21,7 @@ public static class PlayVerb
 
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "hackenbush, domineering or forms" };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var position = new Argument<string?>("position")
         {
             Description = "start position in the ruleset's notation (BRB + G(B,R); ..#./....; {3|-1} + *), @file, or - for stdin; default: one from the demo suite",

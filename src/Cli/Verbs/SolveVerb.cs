@@ -18,15 +18,18 @@ public static class SolveVerb
 
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "forms, hackenbush or domineering" };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var position = new Argument<string>("position") { Description = "position text, @file, or - for stdin" };
         var first = new Option<string>("--first") { Description = "Who moves first: left, right or both", DefaultValueFactory = _ => "both" };
         first.AcceptOnlyFromAmong("left", "right", "both");
         var strategy = new Option<string>("--strategy") { Description = "perfect (decomposition search) or alphabeta (whole-board search)", DefaultValueFactory = _ => "perfect" };
         strategy.AcceptOnlyFromAmong("perfect", "alphabeta");
         var budget = new Option<long>("--budget-ms") { Description = "Time budget of each first player's search, in milliseconds", DefaultValueFactory = _ => DefaultBudgetMs };
-        var json = new Option<bool>("--json") { Description = "Print the SPEC.md §7 JSON fields" };
-        var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json };
+        var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
+        var threads = new Option<int>("--threads") { Description = "Threads of the whole-board search of big Domineering boards", DefaultValueFactory = _ => Math.Min(2, Environment.ProcessorCount) };
+        var table = new Option<FileInfo?>("--table") { Description = "Whole-board table file: read before the solve when it exists, written after it (so an interrupted solve resumes)" };
+        var progress = new Option<bool>("--progress") { Description = "Report nodes, nodes per second and the root move being searched on stderr every few seconds" };
+        var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json, threads, table, progress };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>
         {
@@ -42,22 +45,67 @@ public static class SolveVerb
                 _ => new[] { Side.Left, Side.Right },
             };
             var db = parse.GetValue(DbOption.Option);
-            var report = BigStack.Run(() => Solve(rules, text, firsts, parse.GetValue(strategy)!, TimeSpan.FromMilliseconds(ms), db));
+            int n = parse.GetValue(threads);
+            if (n < 1 || n > 64) throw new InputException($"--threads must be between 1 and 64, got {n}");
+            var extra = new SolveExtras(n, parse.GetValue(table), parse.GetValue(progress));
+            var report = BigStack.Run(() => Solve(rules, text, firsts, parse.GetValue(strategy)!, TimeSpan.FromMilliseconds(ms), db, extra));
             Console.Out.WriteLine(parse.GetValue(json) ? ToJson(report) : ToText(report));
             return Entry.Success;
         }));
         return command;
     }
 
-    public static SolveReport Solve(IRuleset rules, string text, IReadOnlyCollection<Side> firsts, string strategy, TimeSpan budget, FileInfo? db = null)
+    /// <summary>The whole-board options of <c>solve</c>: threads, a table file to resume from, progress on stderr.</summary>
+    public sealed record SolveExtras(int Threads = 1, FileInfo? Table = null, bool Progress = false);
+
+    public static SolveReport Solve(IRuleset rules, string text, IReadOnlyCollection<Side> firsts, string strategy, TimeSpan budget, FileInfo? db = null, SolveExtras? extras = null)
     {
+        extras ??= new SolveExtras();
         var pos = rules.Parse(text);
         var context = new ValueContext();
         DbOption.Load(db, context);
-        IPlayer player = strategy == "alphabeta" ? new AlphaBetaPlayer(log2TableSize: 22) : new PerfectPlayer(context: context);
-        var report = Solver.Solve(pos, firsts, player, budget);
-        if (player is PerfectPlayer) DbOption.Save(db, context);
-        return report;
+        if (strategy == "alphabeta") return Solver.Solve(pos, firsts, new AlphaBetaPlayer(log2TableSize: 22), budget);
+        var settings = new PerfectSettings { BoardOptions = new Bramble.Search.Board.BoardSearchOptions { Threads = extras.Threads } };
+        var player = new PerfectPlayer(settings, context);
+        if (extras.Table is { Exists: true } file)
+        {
+            try
+            {
+                using var input = file.OpenRead();
+                player.WholeBoard.LoadTable(input);
+            }
+            catch (Exception e) when (e is InvalidDataException or EndOfStreamException or IOException)
+            {
+                throw new InputException($"--table {file.Name}: {e.Message}");
+            }
+        }
+        // Ctrl-C stops the search cleanly, so that the table is still written for a later resume.
+        using var halt = new CancellationTokenSource();
+        ConsoleCancelEventHandler onCancel = (_, e) => { e.Cancel = true; halt.Cancel(); };
+        Console.CancelKeyPress += onCancel;
+        using var timer = extras.Progress ? new Timer(_ => Report(player.WholeBoard.Current), null, 2000, 2000) : null;
+        try
+        {
+            var report = Solver.Solve(pos, firsts, player, budget, halt.Token);
+            DbOption.Save(db, context);
+            return report;
+        }
+        finally
+        {
+            Console.CancelKeyPress -= onCancel;
+            if (extras.Table is { } output && player.WholeBoard.Table is not null)
+            {
+                using var stream = output.Create();
+                player.WholeBoard.SaveTable(stream);
+            }
+        }
+    }
+
+    private static void Report(Bramble.Search.Board.BoardProgress? p)
+    {
+        if (p is not { } x) return;
+        double rate = x.ElapsedMs > 0 ? x.Nodes * 1000.0 / x.ElapsedMs : 0;
+        Console.Error.WriteLine($"solve: {x.Nodes:N0} nodes, {rate:N0} nodes/s, {x.ElapsedMs / 1000.0:F0} s, root move {Bramble.Rules.Domineering.CellName.Format(x.RootMove.A)} ({x.RootMoveIndex + 1} of {x.RootMoves})");
     }
 
     public static string ToText(SolveReport r)
@@ -70,6 +118,7 @@ public static class SolveVerb
             string who = a.Winner is { } win ? $"{win.Word()} wins" : "unknown (out of budget)";
             string move = a.Move is { } m ? $", e.g. {m}" : "";
             w.WriteLine($"{(a.First == Side.Left ? "left first " : "right first")}  {who}{move}");
+            if (a.Line is { Count: > 1 } line) w.WriteLine($"             line {string.Join(" ", line)}");
         }
         w.WriteLine($"search       {r.Strategy}, {r.Nodes} nodes, {r.ElapsedMs} ms, {(r.Exact ? "exact" : "not exact (budget spent)")}");
         return w.ToString().TrimEnd();
@@ -81,6 +130,9 @@ public static class SolveVerb
         {
             ["winner"] = a.Winner?.Word(),
             ["move"] = a.Move,
+            ["line"] = a.Line is { } line ? new JsonArray(line.Select(m => (JsonNode?)JsonValue.Create(m)).ToArray()) : null,
+            ["nodes"] = a.Nodes,
+            ["elapsed_ms"] = a.ElapsedMs,
         };
         var o = new JsonObject
         {

@@ -11,39 +11,92 @@ public static class ValueVerb
 {
     public static Command Build()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "forms, hackenbush or domineering" };
-        var position = new Argument<string>("position") { Description = "position text, @file, or - for stdin" };
-        var json = new Option<bool>("--json") { Description = "Print the SPEC.md §7 JSON fields" };
-        var ascii = new Option<bool>("--ascii") { Description = "Write up, down and braces instead of the symbols" };
-        var command = new Command("value", "Exact canonical value of a position and of each component") { ruleset, position, json, ascii };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
+        var position = new Argument<string>("position") { Description = "position text, @file (read whole), or - for stdin" };
+        var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
+        var ascii = new Option<bool>("--ascii") { Description = "Print only ASCII: up, down, +-x and words instead of the symbols" };
+        var budget = new Option<long?>("--budget-ms") { Description = "Give up after this many milliseconds and say the value is not exact within the budget (default: no limit)" };
+        var command = new Command("value", "Exact canonical value of a position and of each component") { ruleset, position, json, ascii, budget };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>
         {
+            long? ms = parse.GetValue(budget);
+            if (ms is <= 0) throw new InputException($"--budget-ms must be a positive number of milliseconds, got {ms}");
             var text = PositionInput.Read(parse.GetValue(position)!);
+            var db = parse.GetValue(DbOption.Option);
+            var context = new ValueContext();
+            bool dbRead = DbOption.Load(db, context);
+            bool asJson = parse.GetValue(json);
             // Deep values recurse in the store and in the writer alike: both run on the big stack.
-            var output = BigStack.Run(() =>
+            string Work()
             {
-                var report = Analyse(parse.GetValue(ruleset)!, text, parse.GetValue(ascii), parse.GetValue(DbOption.Option));
-                return parse.GetValue(json) ? report.ToJson() : report.ToText();
-            });
+                var report = Analyse(parse.GetValue(ruleset)!, text, parse.GetValue(ascii), context);
+                return asJson ? report.ToJson() : report.ToText();
+            }
+            string output;
+            if (ms is { } limit)
+            {
+                // The context stops cooperative searches at the deadline; the wait below also
+                // covers work that never looks at the clock, which is left behind when the verb ends.
+                using var stop = new CancellationTokenSource(TimeSpan.FromMilliseconds(limit));
+                context.Cancellation = stop.Token;
+                context.ResetCounters(budgetMs: limit);
+                string? done;
+                try
+                {
+                    if (!BigStack.TryRun(Work, TimeSpan.FromMilliseconds(limit + 200), out done)) done = null;
+                }
+                catch (BudgetExceededException)
+                {
+                    done = null;
+                }
+                if (done is null)
+                {
+                    Console.Out.WriteLine(asJson ? NotExactJson(limit) : NotExactText(limit));
+                    return Entry.JobFailed;
+                }
+                output = done;
+            }
+            else output = BigStack.Run(Work);
             Console.Out.WriteLine(output);
-            return Entry.Success;
+            bool dbSaved = DbOption.Save(db, context);
+            return dbRead && dbSaved ? Entry.Success : Entry.JobFailed;
         }));
         return command;
     }
 
-    public static ValueReport Analyse(string rulesetName, string text, bool ascii, FileInfo? db = null)
+    public static string NotExactText(long budgetMs) =>
+        $"value        not exact within the budget: no exact value in {budgetMs} ms (raise --budget-ms, or leave it out for no limit)";
+
+    public static string NotExactJson(long budgetMs) =>
+        new JsonObject { ["exact"] = false, ["budget_ms"] = budgetMs }.ToJsonString();
+
+    public static ValueReport Analyse(string rulesetName, string text, bool ascii, ValueContext context)
     {
-        var context = new ValueContext();
-        DbOption.Load(db, context);
         var rules = Rulesets.Find(rulesetName) ?? throw new InputException(
             $"unknown ruleset '{rulesetName}'; known: {string.Join(", ", Rulesets.All.Select(r => r.Name))}");
         var pos = rules.Parse(text);
         var store = context.Store;
         var parts = pos.Components().Select(c => (c.Text, rules.Value(c, context))).ToList();
         var total = store.Sum(parts.Select(p => p.Item2));
-        DbOption.Save(db, context);
-        return new ValueReport(store, total, parts.Select(p => (p.Text, store.Format(p.Item2, ascii))).ToList(), ascii);
+        return new ValueReport(store, total, parts.Select(p => (ascii ? AsciiText(p.Text) : p.Text, store.Format(p.Item2, ascii))).ToList(), ascii);
+    }
+
+    /// <summary>
+    /// A component's text in ASCII: the rulesets' own notations are ASCII already, and a Forms
+    /// term with symbols is written again with the ASCII spellings (up, down, +-x).
+    /// </summary>
+    public static string AsciiText(string text)
+    {
+        if (text.All(char.IsAscii)) return text;
+        try
+        {
+            return ValueExprWriter.Write(ValueNotation.Parse(text), ascii: true);
+        }
+        catch (ValueSyntaxException)
+        {
+            return string.Concat(text.Select(ch => char.IsAscii(ch) ? ch.ToString() : $"\\u{(int)ch:X4}"));
+        }
     }
 }
 
@@ -61,7 +114,7 @@ public sealed class ValueReport(GameStore store, Game value, IReadOnlyList<(stri
         w.WriteLine($"stops        left {store.LeftStop(value)}, right {store.RightStop(value)}");
         w.WriteLine($"mean         {store.Mean(value)}");
         w.WriteLine($"temperature  {store.Temperature(value)}");
-        w.WriteLine($"birthday     {store.Birthday(value)}");
+        w.WriteLine($"birthday     {store.ExactBirthday(value)}");
         if (store.AtomicWeight(value) is { } aw) w.WriteLine($"atomic weight {store.Format(aw, ascii)}");
         if (components.Count > 0)
         {
@@ -82,7 +135,8 @@ public sealed class ValueReport(GameStore store, Game value, IReadOnlyList<(stri
             ["right_stop"] = store.RightStop(value).ToString(),
             ["mean"] = store.Mean(value).ToString(),
             ["temperature"] = store.Temperature(value).ToString(),
-            ["birthday"] = store.Birthday(value),
+            ["birthday"] = JsonNode.Parse(store.ExactBirthday(value).ToString()),
+            ["exact"] = true,
         };
         if (store.AtomicWeight(value) is { } aw) o["atomic_weight"] = store.Format(aw, ascii);
         var list = new JsonArray();

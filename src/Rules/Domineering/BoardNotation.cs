@@ -3,7 +3,7 @@ using System.Text;
 namespace Bramble.Rules.Domineering;
 
 /// <summary>
-/// SPEC.md §3 board notation: rows of '.' (empty) and '#' (filled) separated by '/', or
+/// The board notation of docs/domineering.md: rows of '.' (empty) and '#' (filled) separated by '/', or
 /// <c>&lt;rows&gt;x&lt;columns&gt;</c> for an empty board. A newline also separates rows (so a board
 /// can be kept in a file as a picture), and spaces and tabs are ignored.
 /// </summary>

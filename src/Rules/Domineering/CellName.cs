@@ -1,7 +1,7 @@
 namespace Bramble.Rules.Domineering;
 
 /// <summary>
-/// Cell names of SPEC.md §3: column letter a–z from the left, row number from 1 at the top
+/// Cell names of docs/domineering.md: column letter a–z from the left, row number from 1 at the top
 /// (<c>c4</c>). Internally a cell is <c>row * 26 + column</c>, 0-based, which is also the
 /// <see cref="Move.A"/> of the domino whose top or left cell it is.
 /// </summary>

@@ -8,7 +8,7 @@ namespace Bramble.Rules.Domineering;
 /// Right horizontally; whoever cannot place one loses. The board splits into its 4-connected
 /// regions, and each region's exact canonical value comes from <see cref="RegionValues"/>.
 /// </summary>
-public sealed class DomineeringRuleset : IRuleset, IComponentCatalogue
+public sealed class DomineeringRuleset : IRuleset, IComponentCatalogue, IComposable
 {
     public string Name => "domineering";
 
@@ -61,4 +61,20 @@ public sealed class DomineeringRuleset : IRuleset, IComponentCatalogue
                 if (region.Contains(r, c)) rows[r] |= 1u << c;
         return new Board(region.Height, region.Width, rows);
     }
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    public int ListingLimit => Polyominoes.MaxCells;
+
+    public int DefaultSearchSize => 10;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => DomineeringComposition.ComponentsOfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) => DomineeringComposition.SumOf(this, components);
+
+    public int LeastSize(Game target, GameStore store) => DomineeringComposition.LeastSize(target, store);
+
+    public IEnumerable<IPosition> Construct(Game target, GameStore store) => DomineeringComposition.Construct(this, target, store);
+
+    public TargetFacts Facts(Game target, GameStore store) => DomineeringComposition.Facts(target, store);
 }

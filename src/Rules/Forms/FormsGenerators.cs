@@ -5,7 +5,8 @@ namespace Bramble.Rules.Forms;
 /// <summary>
 /// Reproducible random sums for <c>bramble generate forms …</c>; size is the number of terms
 /// (docs/forms.md). <c>hot</c> and <c>hot-extra</c> follow the random test sums used in the
-/// literature for sums of hot games (CHECKS.md §6).
+/// literature for sums of hot games (the slides accompanying M. Müller and Z. Li,
+/// "Locally informed global search for sums of combinatorial games", CG 2004).
 /// </summary>
 public static class FormsGenerators
 {

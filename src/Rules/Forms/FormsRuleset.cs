@@ -3,14 +3,20 @@ using Bramble.Values;
 namespace Bramble.Rules.Forms;
 
 /// <summary>
-/// Explicit game forms: a position is a sum of value-notation terms (SPEC.md §2–3), each term a
+/// Explicit game forms: a position is a sum of value-notation terms (docs/forms.md, docs/values.md), each term a
 /// component whose value is the canonical form of its expression.
 /// </summary>
-public sealed class FormsRuleset : IRuleset
+public sealed class FormsRuleset : IRuleset, IComposable
 {
     public string Name => "forms";
 
-    public IPosition Parse(string text)
+    /// <summary>Texts longer than this may nest deeply: they are read, and their terms written, on a stack of their own.</summary>
+    private const int DeepTextLength = 2000;
+
+    public IPosition Parse(string text) =>
+        text.Length > DeepTextLength ? BigStack.Run(() => ParseHere(text), 64 * 1024 * 1024) : ParseHere(text);
+
+    private FormsPosition ParseHere(string text)
     {
         IReadOnlyList<(ValueExpr Term, int Column)> terms;
         try
@@ -46,4 +52,20 @@ public sealed class FormsRuleset : IRuleset
 
     public IReadOnlyList<string> Generate(string generator, int count, int size, int seed, string? colours = null) =>
         FormsGenerators.Generate(generator, count, size, seed);
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    public string SizeUnit => "terms";
+
+    // A value is one term of its own canonical form: nothing to list.
+    public int ListingLimit => 0;
+
+    public int DefaultSearchSize => 1;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => [];
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) =>
+        Parse(components.Count == 0 ? "0" : string.Join(" + ", components.Select(c => c.Text)));
+
+    public IEnumerable<IPosition> Construct(Game target, GameStore store) => [Parse(store.Format(target))];
 }

@@ -2,7 +2,7 @@ namespace Bramble.Rules.Hackenbush;
 
 /// <summary>
 /// The name of an edge for a whole game: 1, 2, 3, … in the order the edges appear in the start
-/// position's text (SPEC.md §3). Cutting edges never renames the others.
+/// position's text (docs/hackenbush.md). Cutting edges never renames the others.
 /// </summary>
 public readonly record struct EdgeId(int Value)
 {

@@ -3,11 +3,11 @@ using Bramble.Values;
 namespace Bramble.Rules.Hackenbush;
 
 /// <summary>
-/// Blue-red-green Hackenbush on any graph with a ground: notation of SPEC.md §3, exact values by
+/// Blue-red-green Hackenbush on any graph with a ground: notation of docs/hackenbush.md, exact values by
 /// the fastest method that applies to each part (<see cref="PieceEvaluator"/>), generators of
 /// random positions.
 /// </summary>
-public sealed class HackenbushRuleset : IRuleset
+public sealed class HackenbushRuleset : IRuleset, IComposable
 {
     /// <summary>Pieces larger than this are valued on a big stack: the store's canonical forms recurse.</summary>
     private const int DeepWorkEdges = 400;
@@ -54,4 +54,23 @@ public sealed class HackenbushRuleset : IRuleset
 
     public IReadOnlyList<string> Generate(string generator, int count, int size, int seed, string? colours = null) =>
         PositionGenerator.Generate(generator, count, size, seed, colours);
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    public string SizeUnit => "edges";
+
+    public int ListingLimit => PieceCatalogue.Limit;
+
+    public int DefaultSearchSize => 6;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => PieceCatalogue.OfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) =>
+        ParsePosition(components.Count == 0 ? "0" : string.Join(" + ", components.Select(c => c.Text)));
+
+    public int LeastSize(Game target, GameStore store) => HackenbushComposition.LeastSize(target, store);
+
+    public IEnumerable<IPosition> Construct(Game target, GameStore store) => HackenbushComposition.Construct(this, target, store);
+
+    public TargetFacts Facts(Game target, GameStore store) => HackenbushComposition.Facts(target, store);
 }

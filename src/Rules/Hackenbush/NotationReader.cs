@@ -1,7 +1,7 @@
 namespace Bramble.Rules.Hackenbush;
 
 /// <summary>
-/// Reads the Hackenbush notation of SPEC.md §3 in one pass over the text, without recursion
+/// Reads the Hackenbush notation of docs/hackenbush.md in one pass over the text, without recursion
 /// (a tree may nest as deep as it is long). Edge ids are handed out in order of appearance.
 /// Every error names the column and what could have stood there.
 /// </summary>
@@ -63,7 +63,12 @@ internal sealed class NotationReader
             ReadPart();
             SkipSpace();
             if (AtEnd) return;
-            if (Current != '+') throw Error(_pos, "'+' or the end of the text");
+            // A letter that is no colour is most likely a mistyped one: say so, as the other
+            // places do. A real colour here follows a closed branch list, where no stalk goes on.
+            if (Current != '+')
+                throw Error(_pos, char.IsLetter(Current) && !EdgeColourExtensions.TryParse(Current, out _)
+                    ? "a colour B, R or G"
+                    : "'+' or the end of the text");
             _pos++;
             SkipSpace();
             if (AtEnd) throw Error(_pos, "another part after '+': a stalk such as BRG or a graph such as [B0-1]");

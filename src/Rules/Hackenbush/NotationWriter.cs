@@ -3,7 +3,7 @@ using System.Text;
 namespace Bramble.Rules.Hackenbush;
 
 /// <summary>
-/// Writes a position in the notation of SPEC.md §3 so that reading it back gives the same edges
+/// Writes a position in the notation of docs/hackenbush.md so that reading it back gives the same edges
 /// in the same id order: pieces in order of their edges, trees as stalks with branches when
 /// their pre-order visits the edges in increasing id order, any other piece as a bracket graph
 /// listing its edges by id. When the pieces' ids interleave, the whole position becomes one

@@ -97,14 +97,15 @@ public static class SignExpansion
         for (int i = 1; i <= t - 1; i++)
         {
             int position = t - i;
-            bool bit = (bits[position >> 3] >> (position & 7) & 1) == 1;
+            // The byte array stops at the numerator's highest one bit: positions above it are zeros.
+            bool bit = (position >> 3) < bits.Length && (bits[position >> 3] >> (position & 7) & 1) == 1;
             Append(runs, bit ? sigma : -sigma, 1);
         }
     }
 
     /// <summary>
     /// 1:x, a blue edge carrying x, by arithmetic: x + 1 when x ≥ 0, else (x + j)/2^(j−1) with j
-    /// the least positive integer such that x + j &gt; 1 — the rule for trees in CHECKS.md §2, kept
+    /// the least positive integer such that x + j &gt; 1 — the rule for trees in Winning Ways (from memory), kept
     /// as an independent second route to the same numbers.
     /// </summary>
     public static Dyadic BlueUnder(Dyadic x)

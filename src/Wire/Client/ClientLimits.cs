@@ -7,7 +7,7 @@ namespace Bramble.Wire.Client;
 /// </summary>
 public sealed record ClientLimits
 {
-    /// <summary>SPEC.md §4: a line longer than 1 MiB is an error.</summary>
+    /// <summary>docs/protocol.md: a line longer than 1 MiB is an error.</summary>
     public int MaxLineBytes { get; init; } = 1 << 20;
 
     /// <summary>Bytes one request may produce, notes included, before the reply counts as bad.</summary>

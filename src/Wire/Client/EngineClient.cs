@@ -28,6 +28,7 @@ public sealed class EngineClient : IAsyncDisposable
     private string? _pendingThink;
     private bool _disposed;
     private IReadOnlyList<ProcessTree.Member> _tree = [];
+    private bool _grouped;
 
     private EngineClient(Process process, EngineLaunch launch, ClientLimits limits, Action<string>? stderrSink)
     {
@@ -69,7 +70,15 @@ public sealed class EngineClient : IAsyncDisposable
     {
         if (launch.Argv.Count == 0 || string.IsNullOrWhiteSpace(launch.Argv[0]))
             throw new EngineFailureException(EngineFailureKind.StartFailed, $"{launch.Label}: empty command");
-        var info = new ProcessStartInfo(launch.Argv[0])
+        // In a session of its own (see ProcessGroup), so that killing the group ends everything it started.
+        var grouped = ProcessGroup.Setsid is not null;
+        var program = launch.Argv[0];
+        if (grouped)
+        {
+            program = ProcessGroup.Locate(launch.Argv[0], launch.WorkingDirectory)
+                ?? throw new EngineFailureException(EngineFailureKind.StartFailed, $"{launch}: cannot start: no program {launch.Argv[0]} (not found{(launch.Argv[0].Contains('/') ? "" : " on PATH")})");
+        }
+        var info = new ProcessStartInfo(grouped ? ProcessGroup.Setsid! : program)
         {
             UseShellExecute = false,
             RedirectStandardInput = true,
@@ -77,6 +86,7 @@ public sealed class EngineClient : IAsyncDisposable
             RedirectStandardError = true,
             CreateNoWindow = true,
         };
+        if (grouped) info.ArgumentList.Add(program);
         foreach (var arg in launch.Argv.Skip(1)) info.ArgumentList.Add(arg);
         if (launch.WorkingDirectory is not null) info.WorkingDirectory = launch.WorkingDirectory;
         Process process;
@@ -88,7 +98,7 @@ public sealed class EngineClient : IAsyncDisposable
         {
             throw new EngineFailureException(EngineFailureKind.StartFailed, $"{launch}: cannot start: {e.Message}");
         }
-        return new EngineClient(process, launch, limits ?? ClientLimits.Default, stderrSink);
+        return new EngineClient(process, launch, limits ?? ClientLimits.Default, stderrSink) { _grouped = grouped };
     }
 
     /// <summary><c>hello twine 1</c> → <c>welcome</c>.</summary>
@@ -195,6 +205,7 @@ public sealed class EngineClient : IAsyncDisposable
     /// </summary>
     public void Kill()
     {
+        if (_grouped) ProcessGroup.Kill(ProcessId);
         try
         {
             if (!_process.HasExited) _process.Kill(entireProcessTree: true);

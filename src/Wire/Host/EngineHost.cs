@@ -31,6 +31,8 @@ public sealed class EngineHost
     private ValueContext? _values;
     private LineWriter _out = null!;
     private int _served;
+    private readonly ManualResetEventSlim _finished = new();
+    private long _taken;
 
     public EngineHost(EngineSetup? setup = null)
     {
@@ -55,6 +57,7 @@ public sealed class EngineHost
         }
         finally
         {
+            _finished.Set();
             // The reading thread may still wait on input nobody will send; let it drop what it reads.
             queue.CompleteAdding();
             _worker?.Dispose();
@@ -65,6 +68,7 @@ public sealed class EngineHost
     {
         foreach (var (index, line) in queue.GetConsumingEnumerable())
         {
+            Interlocked.Increment(ref _taken);
             if (line is null) break;
             var parsed = line.Value.Text is { } text ? Codec.ParseRequest(text) : new Parsed<Request>(null, line.Value.Error);
             if (parsed.Message is HaltRequest) continue; // already acted on by the reading thread
@@ -113,15 +117,42 @@ public sealed class EngineHost
                 queue.Add(new Numbered(index, line));
             }
             queue.Add(new Numbered(index + 1, null));
+            WatchEnd();
         }
         catch (IOException e)
         {
             _log.Warning(e, "reading the input failed; treating it as its end");
             TryAdd(queue, new Numbered(index + 1, null));
+            WatchEnd();
         }
         catch (InvalidOperationException)
         {
             // The session is over (bye): nothing more is served.
+        }
+    }
+
+    /// <summary>
+    /// At end of input the requests already read are still answered, in order (a script may send
+    /// everything and then close its end); but when one request stays in hand longer than
+    /// <see cref="EngineSetup.EndGrace"/> (a long computation), <see cref="EngineSetup.ForceExit"/>
+    /// ends the process: the harness may be gone (killed), and an engine must never outlive it
+    /// thinking for nobody.
+    /// </summary>
+    private void WatchEnd()
+    {
+        if (_setup.ForceExit is not { } exit) return;
+        var seen = Interlocked.Read(ref _taken);
+        while (!_finished.Wait(_setup.EndGrace))
+        {
+            var now = Interlocked.Read(ref _taken);
+            if (now != seen)
+            {
+                seen = now;
+                continue;
+            }
+            _log.Warning("end of input while still busy: exiting");
+            exit(0);
+            return;
         }
     }
 
@@ -182,7 +213,8 @@ public sealed class EngineHost
             Reply(new ErrReply(error));
             return;
         }
-        if (settings!.Strategy != _settings.Strategy || settings.Seed != _settings.Seed) _player = null;
+        // A seed, once set, is where the player's chance starts: even the same seed again starts it afresh.
+        if (settings!.Strategy != _settings.Strategy || settings.Nodes != _settings.Nodes || set.Name == "seed") _player = null;
         _settings = settings;
         _log.Information("set {Name} {Value}", set.Name, set.Value);
         Reply(new OkReply());
@@ -215,13 +247,16 @@ public sealed class EngineHost
             Reply(Err(ErrorCodes.BadPosition, $"column {e.Column + 1}: expected {e.Expected}, found {Found(e.Text, e.Column)}"));
             return;
         }
-        catch (Exception e) when (e is FormatException or ArgumentException)
+        catch (Exception e) when (e is FormatException or ArgumentException or OverflowException)
         {
             Reply(Err(ErrorCodes.BadPosition, e.Message));
             return;
         }
         _position = position;
         _values = null;
+        // Limited by work, a player starts every game with an empty memo: what it remembers from
+        // earlier games would change its node counts, and so its moves, with the order games come in.
+        if (_settings.Nodes is not null) _player = null;
         _log.Information("begin {Ruleset} {Position}", ruleset.Name, position.Text);
         Reply(new OkReply(position.Components().Count));
     }
@@ -268,8 +303,10 @@ public sealed class EngineHost
             Reply(Err(ErrorCodes.OutOfOrder, $"{think.Side.Word()} moved last; it is {think.Side.Other().Word()}'s turn"));
             return;
         }
-        _player ??= _setup.CreatePlayer(_settings.Strategy, _settings.Seed);
-        var budget = MoveBudget.For(think.ClockMs, think.IncMs, _settings.BudgetMs, _position.Size);
+        _player ??= _setup.CreatePlayer(_settings.Strategy, _settings.Seed, _settings.Nodes);
+        var budget = _settings.Nodes is null
+            ? MoveBudget.For(think.ClockMs, think.IncMs, _settings.BudgetMs, _position.Size)
+            : MoveBudget.SafetyNet(think.ClockMs, _settings.BudgetMs);
         _log.Debug("think {Side} with {Budget} ms", think.Side.Word(), budget.TotalMilliseconds);
         var thinking = new Thinking(index, _player, _position, think.Side, budget, _setup.Grace, _out, _log);
         Interlocked.Exchange(ref _thinking, thinking);

@@ -20,7 +20,8 @@ public sealed record EngineSetup
 
     public IReadOnlyList<string> Strategies { get; init; } = Players.Names;
 
-    public Func<string, int, IPlayer> CreatePlayer { get; init; } = Players.Create;
+    /// <summary>Makes a player from a strategy name, a seed and a node limit per decision (null: none).</summary>
+    public Func<string, int, long?, IPlayer> CreatePlayer { get; init; } = Players.Create;
 
     public Func<ValueContext> CreateValueContext { get; init; } = () => new ValueContext();
 
@@ -34,6 +35,14 @@ public sealed record EngineSetup
     public TimeSpan Grace { get; init; } = TimeSpan.FromMilliseconds(100);
 
     public ILogger Log { get; init; } = Serilog.Core.Logger.None;
+
+    /// <summary>
+    /// Ends the process when input has ended and the session is still busy after <see cref="EndGrace"/>
+    /// (null: never; a host inside another program, as in tests, is not its process).
+    /// </summary>
+    public Action<int>? ForceExit { get; init; }
+
+    public TimeSpan EndGrace { get; init; } = TimeSpan.FromSeconds(1);
 
     /// <summary>The informational version without its source-revision suffix, as one token.</summary>
     public static string VersionOf(Assembly assembly)

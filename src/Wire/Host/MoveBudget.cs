@@ -25,6 +25,15 @@ public static class MoveBudget
     public const int FewestMoves = 4;
     public const int MostMoves = 30;
 
+    /// <summary>
+    /// The time limit of a player limited by nodes: the whole clock but the reserve (or the
+    /// <c>budget-ms</c> setting without a clock). It exists so that a node limit set too high for
+    /// the clock costs a weak move rather than a game on time; a move that reaches it may differ
+    /// from run to run.
+    /// </summary>
+    public static TimeSpan SafetyNet(long? clockMs, long budgetMs) =>
+        TimeSpan.FromMilliseconds(Math.Max(1, clockMs is { } clock ? clock - ReserveMs - clock / 20 : budgetMs));
+
     public static TimeSpan For(long? clockMs, long? incMs, long budgetMs, int positionSize)
     {
         if (clockMs is not { } clock) return TimeSpan.FromMilliseconds(Math.Max(1, budgetMs));

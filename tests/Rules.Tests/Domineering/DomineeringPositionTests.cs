@@ -3,7 +3,7 @@ using Bramble.Values;
 
 namespace Bramble.Rules.Tests.Domineering;
 
-/// <summary>Notation, moves, components and hashing of Domineering positions (SPEC.md §3).</summary>
+/// <summary>Notation, moves, components and hashing of Domineering positions (docs/ (position notation)).</summary>
 public class DomineeringPositionTests
 {
     private readonly DomineeringRuleset _rules = new();
@@ -59,7 +59,7 @@ public class DomineeringPositionTests
     public void LeftPlacesVerticalAndRightHorizontalDominoesNamedByTheirTopOrLeftCell()
     {
         var position = _rules.Parse("2x2");
-        // SPEC.md §3: Left's domino covers c4 and c5, Right's covers c4 and d4.
+        // docs/ (position notation): Left's domino covers c4 and c5, Right's covers c4 and d4.
         Assert.Equal(["a1", "b1"], position.Moves(Side.Left).Select(position.FormatMove));
         Assert.Equal(["a1", "a2"], position.Moves(Side.Right).Select(position.FormatMove));
         Assert.Equal("#./#.", position.Play(Side.Left, position.ParseMove("a1")).Text);

@@ -3,7 +3,7 @@ using Bramble.Values;
 
 namespace Bramble.Rules.Tests.Domineering;
 
-/// <summary>Values and outcome classes from the literature (CHECKS.md §8), compared through exact values.</summary>
+/// <summary>Values and outcome classes from the literature (published Domineering results (Lachmann, Moore, Rapaport; Bullock)), compared through exact values.</summary>
 public class PublishedValuesTests
 {
     private readonly DomineeringRuleset _rules = new();
@@ -57,7 +57,7 @@ public class PublishedValuesTests
     [Fact]
     public void LShapedTrominoIsStar()
     {
-        // Derived from the definitions (CHECKS.md §8 [D]): each side has one move, to a lone cell (0).
+        // Derived from the definitions (published Domineering results (Lachmann, Moore, Rapaport; Bullock) [D]): each side has one move, to a lone cell (0).
         Assert.Equal(S.Star, Value(".#/.."));
         Assert.Equal(S.Star, Value("../#."));
     }
@@ -96,7 +96,7 @@ public class PublishedValuesTests
     [MemberData(nameof(TheoremBoards))]
     public void TransposedRectangleWinnerWithHorizontalFirstIsTheMirrorStatement(int rows, int columns, Side winner)
     {
-        // CHECKS.md §8: Horizontal first on m×n is Vertical first on n×m with the roles swapped.
+        // published Domineering results (Lachmann, Moore, Rapaport; Bullock): Horizontal first on m×n is Vertical first on n×m with the roles swapped.
         var value = Value(Rectangle(columns, rows));
         // Source: Uiterwijk, CGW 2013, as above, read on the transposed board.
         Assert.Equal(winner.Other(), S.OutcomeOf(value).WinnerMovingFirst(Side.Right));

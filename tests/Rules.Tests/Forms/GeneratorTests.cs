@@ -32,7 +32,7 @@ public class GeneratorTests
         {
             foreach (var (_, term) in ((FormsPosition)_rules.Parse(text)).Terms)
             {
-                // Müller & Li, CG 2004 (CHECKS.md §6): {a|b||c|d}, d = 0, c = d + rand(50), b = c + rand(50), a = b + rand(50).
+                // Müller & Li, CG 2004 (Winning Ways ch. 6; Berlekamp 1996; Hanner 1959): {a|b||c|d}, d = 0, c = d + rand(50), b = c + rand(50), a = b + rand(50).
                 var form = Assert.IsType<OptionsExpr>(term.Expression);
                 var outer = Assert.IsType<OptionsExpr>(Assert.Single(form.Left));
                 var inner = Assert.IsType<OptionsExpr>(Assert.Single(form.Right));
@@ -52,7 +52,7 @@ public class GeneratorTests
         {
             foreach (var (_, term) in ((FormsPosition)_rules.Parse(text)).Terms)
             {
-                // Müller & Li, CG 2004 (CHECKS.md §6), variant: each option A gains {A + rand(10) | A + rand(10)}.
+                // Müller & Li, CG 2004 (Winning Ways ch. 6; Berlekamp 1996; Hanner 1959), variant: each option A gains {A + rand(10) | A + rand(10)}.
                 var form = Assert.IsType<OptionsExpr>(term.Expression);
                 Assert.Equal(2, form.Left.Count);
                 Assert.Equal(2, form.Right.Count);

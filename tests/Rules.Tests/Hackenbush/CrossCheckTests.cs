@@ -97,7 +97,7 @@ public sealed class CrossCheckTests
     [Fact]
     public void BlueEdgeCarryingXIsTheOrdinalSumFormula()
     {
-        // CHECKS.md §2 trees: 1:x = x + 1 for x ≥ 0, else (x + j)/2^(j−1) with j the least positive
+        // Winning Ways vol. 1 ch. 2; On Numbers and Games trees: 1:x = x + 1 for x ≥ 0, else (x + j)/2^(j−1) with j the least positive
         // integer such that x + j > 1 [M formula; the ordinal sum itself is P]. Checked here against
         // brute force too, so the remembered formula is confirmed rather than trusted.
         var context = new ValueContext();

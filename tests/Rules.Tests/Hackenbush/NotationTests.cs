@@ -3,7 +3,7 @@ using Bramble.Values;
 
 namespace Bramble.Rules.Tests.Hackenbush;
 
-/// <summary>Reading and writing the notation of SPEC.md §3: edge ids, errors with carets, round trips.</summary>
+/// <summary>Reading and writing the notation of docs/ (position notation): edge ids, errors with carets, round trips.</summary>
 public sealed class NotationTests
 {
     private readonly HackenbushRuleset _rules = new();
@@ -15,7 +15,7 @@ public sealed class NotationTests
     public void SpecExampleParsesWithIdsInOrderOfAppearance()
     {
         var p = _rules.ParsePosition("BR + G(B,R) + [B0-1,R1-2,G2-0,B1-3]");
-        // SPEC.md §3: ids 1, 2, 3, … in the order the edges appear in the text (common practice check of the spec).
+        // docs/ (position notation): ids 1, 2, 3, … in the order the edges appear in the text (common practice check of the spec).
         Assert.Equal("e1:B e2:R e3:G e4:B e5:R e6:B e7:R e8:G e9:B", Describe(p));
         Assert.Equal(3, p.Components().Count);
     }
@@ -59,13 +59,13 @@ public sealed class NotationTests
 
     [Theory]
     [InlineData("", 0, "a stalk such as BRG")]
-    [InlineData("BX", 1, "'+' or the end")]
+    [InlineData("BX", 1, "a colour B, R or G")] // a letter where a colour could stand is named as such
     [InlineData("B +", 3, "another part after '+'")]
     [InlineData("B + + R", 4, "a stalk (B, R or G) or a graph")]
     [InlineData("G(B,R", 5, "',' or ')'")]
     [InlineData("G(B,)", 4, "a colour B, R or G")]
     [InlineData("G()", 2, "a colour B, R or G")]
-    [InlineData("G(B)R", 4, "'+' or the end")]
+    [InlineData("G(B)R", 4, "'+' or the end")] // a colour cannot follow a closed branch list
     [InlineData("[]", 1, "an edge such as B0-1")]
     [InlineData("[B0 1]", 4, "'-' between the two nodes")]
     [InlineData("[B0-]", 4, "a node number")]

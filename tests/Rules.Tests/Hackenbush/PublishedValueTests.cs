@@ -3,7 +3,7 @@ using Bramble.Values;
 
 namespace Bramble.Rules.Tests.Hackenbush;
 
-/// <summary>The published Hackenbush values of CHECKS.md §2-4, each with its source.</summary>
+/// <summary>The published Hackenbush values of Winning Ways vol. 1 ch. 2; On Numbers and Games-4, each with its source.</summary>
 public sealed class PublishedValueTests
 {
     private readonly HackenbushRuleset _rules = new();
@@ -20,7 +20,7 @@ public sealed class PublishedValueTests
     // ---------------------------------------------------------------- §2 blue-red
 
     [Theory]
-    // Sign-expansion rule: Winning Ways vol. 1 ch. 2 [P]; these stalk values derived from the definitions (CHECKS.md §2).
+    // Sign-expansion rule: Winning Ways vol. 1 ch. 2 [P]; these stalk values derived from the definitions (Winning Ways vol. 1 ch. 2; On Numbers and Games).
     [InlineData("B", 1, 0)]
     [InlineData("R", -1, 0)]
     [InlineData("BR", 1, 1)]
@@ -34,7 +34,7 @@ public sealed class PublishedValueTests
     [InlineData("BRBRBR", 21, 5)]
     public void SignExpansionStalks(string stalk, long numerator, int exponent)
     {
-        // CHECKS.md §2, sign-expansion rule (Winning Ways vol. 1 ch. 2); values derived from the definitions.
+        // Winning Ways vol. 1 ch. 2; On Numbers and Games, sign-expansion rule (Winning Ways vol. 1 ch. 2); values derived from the definitions.
         Assert.Equal(Dyadic.Create(numerator, exponent), SignExpansion.Stalk(stalk.Select(c => c == 'B' ? EdgeColour.Blue : EdgeColour.Red)));
         // The same through the ruleset's value.
         AssertValue(Number(numerator, exponent), stalk);
@@ -42,12 +42,12 @@ public sealed class PublishedValueTests
 
     [Fact]
     public void BlueStemWithBlueAndRedTwigIsOne() =>
-        // CHECKS.md §2 trees: ordinal sum 1:x [P]; example derived from the definitions.
+        // Winning Ways vol. 1 ch. 2; On Numbers and Games trees: ordinal sum 1:x [P]; example derived from the definitions.
         AssertValue(Number(1), "B(B,R)");
 
     [Fact]
     public void BlueStemWithTwoRedTwigsIsOneQuarter() =>
-        // CHECKS.md §2 trees: 1:(-2) = (-2 + 4)/2^3 = 1/4, derived from the definitions.
+        // Winning Ways vol. 1 ch. 2; On Numbers and Games trees: 1:(-2) = (-2 + 4)/2^3 = 1/4, derived from the definitions.
         AssertValue(Number(1, 2), "B(R,R)");
 
     [Fact]
@@ -90,7 +90,7 @@ public sealed class PublishedValueTests
 
     [Fact]
     public void StemWithTwoTwigsIsStar() =>
-        // Colon principle, Ferguson §6.2 [P]; this example derived from the definitions (CHECKS.md §3).
+        // Colon principle, Ferguson §6.2 [P]; this example derived from the definitions (T. S. Ferguson, Game Theory, Part I §6; Winning Ways ch. 7).
         AssertValue(Store.Nimber(1), "G(G,G)");
 
     [Fact]
@@ -111,7 +111,7 @@ public sealed class PublishedValueTests
     [InlineData("[G0-1,G1-1]", 2)]
     public void FusionPrincipleExamples(string text, int nimber)
     {
-        // CHECKS.md §3, fusion principle (Ferguson, Game Theory, §6.3), examples derived from the definitions.
+        // T. S. Ferguson, Game Theory, Part I §6; Winning Ways ch. 7, fusion principle (Ferguson, Game Theory, §6.3), examples derived from the definitions.
         AssertValue(Store.Nimber(nimber), text);
         Assert.Equal(nimber, Fusion.NimValue(_rules.ParsePosition(text)));
     }
@@ -120,23 +120,23 @@ public sealed class PublishedValueTests
 
     [Fact]
     public void GreenBlueIsUpStar() =>
-        // CHECKS.md §4: GB = ↑*, by exhaustive play from the definitions [D].
+        // derived from the definitions by exhaustive play: GB = ↑*, by exhaustive play from the definitions [D].
         AssertValue(Store.UpStar(Dyadic.Zero, 1, 1), "GB");
 
     [Fact]
     public void GreenRedIsDownStar() =>
-        // CHECKS.md §4: GR = ↓* [D].
+        // derived from the definitions by exhaustive play: GR = ↓* [D].
         AssertValue(Store.UpStar(Dyadic.Zero, -1, 1), "GR");
 
     [Fact]
     public void BlueGreenIsOneStar() =>
-        // CHECKS.md §4: BG = 1* [D].
+        // derived from the definitions by exhaustive play: BG = 1* [D].
         AssertValue(Store.UpStar(Dyadic.One, 0, 1), "BG");
 
     [Fact]
     public void GreenStalksOfTwoAndThree()
     {
-        // CHECKS.md §4: GG = *2, GGG = *3 [D].
+        // derived from the definitions by exhaustive play: GG = *2, GGG = *3 [D].
         AssertValue(Store.Nimber(2), "GG");
         AssertValue(Store.Nimber(3), "GGG");
     }
@@ -146,21 +146,21 @@ public sealed class PublishedValueTests
     {
         var upStar = Store.UpStar(Dyadic.Zero, 1, 1);
         var expected = Store.Make([Store.Zero, upStar], [Store.Zero]);
-        // CHECKS.md §4: GBB = {0,↑*|0} [D].
+        // derived from the definitions by exhaustive play: GBB = {0,↑*|0} [D].
         AssertValue(expected, "GBB");
         var g = Value("GBB");
-        // CHECKS.md §4: fuzzy, strictly between ↑* and ⇑* [D].
+        // derived from the definitions by exhaustive play: fuzzy, strictly between ↑* and ⇑* [D].
         Assert.Equal(Outcome.N, Store.OutcomeOf(g));
         Assert.True(Store.Less(upStar, g) && Store.Less(g, Store.UpStar(Dyadic.Zero, 2, 1)));
     }
 
     [Fact]
     public void UpStarHasTheCanonicalFormZeroStarOverZero() =>
-        // Winning Ways ch. 3; Siegel 2013: ↑* = {0,*|0} [P]; GB is ↑* (CHECKS.md §4).
+        // Winning Ways ch. 3; Siegel 2013: ↑* = {0,*|0} [P]; GB is ↑* (derived from the definitions by exhaustive play).
         AssertValue(Store.Make([Store.Zero, Store.Star], [Store.Zero]), "GB");
 
     [Theory]
-    // Flowers, CHECKS.md §4 [D: exhaustive play from the definitions]: green stem, loop petals on top.
+    // Flowers, derived from the definitions by exhaustive play [D: exhaustive play from the definitions]: green stem, loop petals on top.
     [InlineData("[G0-1,B1-1]", "up*")]
     [InlineData("[G0-1,B1-1,B1-1]", "{0,up*|0}")]
     [InlineData("[G0-1,R1-1]", "down*")]
@@ -168,7 +168,7 @@ public sealed class PublishedValueTests
     [InlineData("[G0-1,G1-1]", "*2")]
     [InlineData("[G0-1,G1-2,B2-2,R2-2]", "*2")]
     public void Flowers(string text, string value) =>
-        // CHECKS.md §4 flowers, derived by exhaustive play from the definitions.
+        // derived from the definitions by exhaustive play flowers, derived by exhaustive play from the definitions.
         AssertValue(Store.Parse(value), text);
 
     [Fact]

@@ -17,7 +17,7 @@ public static class Setups
             Version = "9.9.9",
             Rulesets = [Stalks, Endless],
             Strategies = names,
-            CreatePlayer = (name, seed) => name == "random" ? new RandomPlayer(seed) : players.First(p => p.Name == name).Make(),
+            CreatePlayer = (name, seed, _) => name == "random" ? new RandomPlayer(seed) : players.First(p => p.Name == name).Make(),
             Settings = new EngineSettings(names[0], BudgetMs: 1000, Seed: 1, AssessMs: 1000),
         };
     }

@@ -10,7 +10,8 @@ namespace Bramble.Arena.Fixture;
 /// its misbehaviour is due — after <c>--after N</c> thinks, and with <c>--once FILE</c> only in the
 /// first process to get there — and then does what <c>--mode</c> says:
 /// good, crash, hang, garbage, illegal, none, huge, slow, stubborn, wrong-kind, noisy, exit-at-start,
-/// spawn (starts a sleeping child at once, then plays well). <c>--pick</c> chooses how it plays well:
+/// spawn (starts a sleeping child at once, then plays well), orphan (starts <c>sleep 900</c> when
+/// asked to think, then exits). <c>--pick</c> chooses how it plays well:
 /// random (seeded), first, or perfect.
 /// </summary>
 public sealed class FixtureEngine
@@ -22,13 +23,14 @@ public sealed class FixtureEngine
     private readonly string _rulesets;
     private readonly string _pick;
     private readonly Bramble.Rules.ValueContext _values = new();
-    private readonly Random _random;
+    private Random _random;
     private readonly Stream _out = Console.OpenStandardOutput();
     private readonly Lock _write = new();
     private readonly HeapsRuleset _rules = new();
     private HeapsPosition? _position;
     private int _thinks;
     private CancellationTokenSource? _thinking;
+    private readonly string? _pidDir;
 
     public FixtureEngine(Dictionary<string, string> options)
     {
@@ -39,6 +41,7 @@ public sealed class FixtureEngine
         _rulesets = options.GetValueOrDefault("rulesets", "heaps");
         _pick = options.GetValueOrDefault("pick", "random");
         _random = new Random(int.Parse(options.GetValueOrDefault("seed", "1")));
+        _pidDir = options.GetValueOrDefault("pid-dir");
         if (options.TryGetValue("pid-dir", out var folder))
             File.WriteAllText(Path.Combine(folder, Environment.ProcessId.ToString()), _mode);
         if (_mode == "spawn")
@@ -65,6 +68,8 @@ public sealed class FixtureEngine
                     Say($"welcome name=fixture-{_mode} version=1 rulesets={_rulesets} colour=green");
                     break;
                 case "set":
+                    // The harness seeds each game of a seeded match: chance starts afresh from the seed.
+                    if (words.Length == 3 && words[1] == "seed") _random = new Random(int.Parse(words[2]));
                     Say("ok");
                     break;
                 case "begin":
@@ -152,6 +157,12 @@ public sealed class FixtureEngine
         switch (_mode)
         {
             case "crash":
+                Environment.Exit(3);
+                break;
+            case "orphan":
+                // A grandchild started after the handshake that holds the engine's stdout, then the engine dies.
+                var sleeper = Process.Start(new ProcessStartInfo("sleep") { ArgumentList = { "900" }, UseShellExecute = false })!;
+                if (_pidDir is not null) File.WriteAllText(Path.Combine(_pidDir, sleeper.Id.ToString()), "sleep");
                 Environment.Exit(3);
                 break;
             case "hang":

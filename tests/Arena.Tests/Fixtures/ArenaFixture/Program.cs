@@ -7,6 +7,7 @@ using Bramble.Arena.Standings;
 
 // ArenaFixture engine [--mode M] [--after N] [--once FILE] [--delay-ms D] [--seed S] [--pid-dir DIR] [--rulesets a,b] [--pick first]
 // ArenaFixture sleeper [--pid-dir DIR]
+// ArenaFixture lock JOURNAL
 // ArenaFixture match SPEC [--resume] [--fresh] [--shard K/N] [--parallel N]
 if (args.Length == 0) return 2;
 var options = new Dictionary<string, string>();
@@ -30,6 +31,15 @@ switch (args[0])
         return 0;
     case "match":
         return Match(positional!, options, flags);
+    case "lock":
+        // Holds a journal's lock, as a run writing it would, until its input ends.
+        using (Bramble.Arena.Journal.JournalLock.Take(positional!))
+        {
+            Console.Out.WriteLine("locked");
+            Console.Out.Flush();
+            Console.In.ReadToEnd();
+        }
+        return 0;
     default:
         return 2;
 }

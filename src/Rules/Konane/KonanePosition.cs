@@ -1,0 +1,195 @@
+using Bramble.Rules.Common;
+using Bramble.Values;
+
+namespace Bramble.Rules.Konane;
+
+/// <summary>
+/// A Konane position: Left's stones (x) and Right's (o) on a board. A move jumps one of the
+/// mover's stones over an orthogonally adjacent opposing stone into the empty square beyond,
+/// and may go on jumping in the same direction; every jumped stone is removed. A move is named
+/// <c>from-to</c>, e.g. <c>c3-c7</c> for a double jump (<see cref="Move.A"/> and
+/// <see cref="Move.B"/> are the two squares, row * columns + column).
+/// </summary>
+public sealed class KonanePosition : IPosition
+{
+    private static readonly (int Dr, int Dc)[] s_steps = [(-1, 0), (1, 0), (0, -1), (0, 1)];
+    private readonly KonaneRuleset _ruleset;
+    private IReadOnlyList<int[]>? _clusters;
+
+    internal KonanePosition(KonaneRuleset ruleset, StoneGrid grid)
+    {
+        _ruleset = ruleset;
+        Grid = grid;
+        Text = grid.Text;
+        Hash = TextHash.Of(Text);
+    }
+
+    public StoneGrid Grid { get; }
+
+    public IRuleset Ruleset => _ruleset;
+
+    public string Text { get; }
+
+    public ulong Hash { get; }
+
+    public int Size => Grid.StoneCount;
+
+    private bool Inside(int r, int c) => r >= 0 && r < Grid.Rows && c >= 0 && c < Grid.Columns;
+
+    public IReadOnlyList<Move> Moves(Side side)
+    {
+        var mine = StoneGrid.Of(side);
+        var theirs = StoneGrid.Opponent(mine);
+        var moves = new List<Move>();
+        for (int r = 0; r < Grid.Rows; r++)
+            for (int c = 0; c < Grid.Columns; c++)
+            {
+                if (Grid.At(r, c) != mine) continue;
+                foreach (var (dr, dc) in s_steps)
+                {
+                    // Each landing square along the line is a move of its own: the jumper may stop after any jump.
+                    int jr = r + dr, jc = c + dc;
+                    while (Inside(jr + dr, jc + dc) && Grid.At(jr, jc) == theirs && Grid.At(jr + dr, jc + dc) == Stone.None)
+                    {
+                        moves.Add(new Move(Grid.Index(r, c), Grid.Index(jr + dr, jc + dc)));
+                        jr += 2 * dr;
+                        jc += 2 * dc;
+                        if (!Inside(jr, jc)) break;
+                    }
+                }
+            }
+        return moves;
+    }
+
+    public IPosition Play(Side side, Move move)
+    {
+        int cells = Grid.Rows * Grid.Columns;
+        if (move.A < 0 || move.A >= cells || move.B < 0 || move.B >= cells)
+            throw new IllegalMoveException($"{FormatMove(move)}: off the {Grid.Rows}x{Grid.Columns} board");
+        var mine = StoneGrid.Of(side);
+        if (Grid[move.A] != mine)
+            throw new IllegalMoveException($"{FormatMove(move)} is not a legal move for {side.Word()}: {Grid.CellName(move.A)} holds no {(side == Side.Left ? "x" : "o")} stone");
+        int r0 = move.A / Grid.Columns, c0 = move.A % Grid.Columns, r1 = move.B / Grid.Columns, c1 = move.B % Grid.Columns;
+        int distance = Math.Abs(r1 - r0) + Math.Abs(c1 - c0);
+        if ((r0 != r1 && c0 != c1) || distance == 0 || distance % 2 != 0)
+            throw new IllegalMoveException($"{FormatMove(move)} is not a legal move for {side.Word()}: a stone jumps along a row or column, two squares per jump");
+        int dr = Math.Sign(r1 - r0), dc = Math.Sign(c1 - c0);
+        var next = Grid.CopyCells();
+        var theirs = StoneGrid.Opponent(mine);
+        for (int k = 1; k <= distance; k++)
+        {
+            int cell = Grid.Index(r0 + k * dr, c0 + k * dc);
+            var want = k % 2 == 1 ? theirs : Stone.None;
+            if (Grid[cell] != want)
+                throw new IllegalMoveException($"{FormatMove(move)} is not a legal move for {side.Word()}: {Grid.CellName(cell)} {(want == Stone.None ? "is not empty" : "holds no opposing stone to jump")}");
+            next[cell] = Stone.None;
+        }
+        next[move.A] = Stone.None;
+        next[move.B] = mine;
+        return new KonanePosition(_ruleset, new StoneGrid(Grid.Rows, Grid.Columns, next));
+    }
+
+    public string FormatMove(Move move) => $"{Grid.CellName(move.A)}-{Grid.CellName(move.B)}";
+
+    public Move ParseMove(string text)
+    {
+        var (from, to) = Grid.ReadMove(text, "c3-c5");
+        return new Move(from, to);
+    }
+
+    /// <summary>
+    /// Groups of stones that no sequence of moves can bring together. A move lands next to the
+    /// stone it jumped and removes at least one stone, so a group of n stones never reaches
+    /// further than n − 1 squares (Manhattan distance) from where its stones stand, and it makes
+    /// at most n − 1 moves. Two groups of a and b stones interact only if they come within one
+    /// square, so groups further apart than a + b − 1 are independent. Starting from single
+    /// stones, groups closer than that are merged until none are; groups where nobody can move
+    /// are dropped (nothing can ever reach them).
+    /// </summary>
+    internal IReadOnlyList<int[]> Clusters => _clusters ??= FindClusters();
+
+    private int[][] FindClusters()
+    {
+        var clusters = new List<List<int>>();
+        for (int cell = 0; cell < Grid.Rows * Grid.Columns; cell++)
+            if (Grid[cell] != Stone.None) clusters.Add([cell]);
+        bool merged = true;
+        while (merged)
+        {
+            merged = false;
+            for (int a = 0; a < clusters.Count && !merged; a++)
+                for (int b = a + 1; b < clusters.Count && !merged; b++)
+                {
+                    int reach = clusters[a].Count + clusters[b].Count - 1;
+                    if (Distance(clusters[a], clusters[b]) <= reach)
+                    {
+                        clusters[a].AddRange(clusters[b]);
+                        clusters.RemoveAt(b);
+                        merged = true;
+                    }
+                }
+        }
+        return clusters.Select(c => c.Order().ToArray()).Where(HasMoves).ToArray();
+    }
+
+    private int Distance(List<int> a, List<int> b)
+    {
+        int best = int.MaxValue;
+        foreach (int x in a)
+            foreach (int y in b)
+                best = Math.Min(best, Math.Abs(x / Grid.Columns - y / Grid.Columns) + Math.Abs(x % Grid.Columns - y % Grid.Columns));
+        return best;
+    }
+
+    private bool HasMoves(int[] cluster)
+    {
+        foreach (int cell in cluster)
+        {
+            int r = cell / Grid.Columns, c = cell % Grid.Columns;
+            var theirs = StoneGrid.Opponent(Grid[cell]);
+            foreach (var (dr, dc) in s_steps)
+                if (Inside(r + 2 * dr, c + 2 * dc) && Grid.At(r + dr, c + dc) == theirs && Grid.At(r + 2 * dr, c + 2 * dc) == Stone.None) return true;
+        }
+        return false;
+    }
+
+    public IReadOnlyList<IPosition> Components()
+    {
+        var clusters = Clusters;
+        if (clusters.Count == 1 && clusters[0].Length == Grid.StoneCount) return [this];
+        return clusters.Select(cluster => (IPosition)new KonanePosition(_ruleset, Keep(cluster))).ToArray();
+    }
+
+    private StoneGrid Keep(int[] cluster)
+    {
+        var cells = new Stone[Grid.Rows * Grid.Columns];
+        foreach (int cell in cluster) cells[cell] = Grid[cell];
+        return new StoneGrid(Grid.Rows, Grid.Columns, cells);
+    }
+
+    /// <summary>
+    /// Each group keyed by the part of the board it can ever use: its bounding box widened by
+    /// n − 1 squares on each side, cut off at the board's edges (so an edge the group can reach is
+    /// part of the key and one it cannot reach is not), under the eight symmetries of the square
+    /// and the exchange of colours (see <see cref="StoneGrid.SignedKey"/>).
+    /// </summary>
+    public string NormalKey => ComponentValues.JoinKeys(Clusters.Select(KeyOf));
+
+    private string KeyOf(int[] cluster)
+    {
+        int top = int.MaxValue, bottom = -1, left = int.MaxValue, right = -1;
+        foreach (int cell in cluster)
+        {
+            int r = cell / Grid.Columns, c = cell % Grid.Columns;
+            top = Math.Min(top, r); bottom = Math.Max(bottom, r);
+            left = Math.Min(left, c); right = Math.Max(right, c);
+        }
+        int margin = cluster.Length - 1;
+        top = Math.Max(0, top - margin);
+        left = Math.Max(0, left - margin);
+        bottom = Math.Min(Grid.Rows - 1, bottom + margin);
+        right = Math.Min(Grid.Columns - 1, right + margin);
+        var grid = cluster.Length == Grid.StoneCount ? Grid : Keep(cluster);
+        return grid.SignedKey(top, left, bottom - top + 1, right - left + 1);
+    }
+}

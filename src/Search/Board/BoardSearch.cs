@@ -1,0 +1,415 @@
+using System.Numerics;
+
+namespace Bramble.Search.Board;
+
+/// <summary>
+/// Win/loss search of one Domineering rectangle (holes allowed) on bitboards: T is <see cref="ulong"/>
+/// for boards of up to 64 cells and <see cref="UInt128"/> up to 128. The state is two bitboards of
+/// empty cells (one per view, <see cref="BoardShape"/>) and eight incremental hashes; a move is two
+/// AND-NOTs and eight XORs, undone by restoring the saved words. Nothing on the hot path allocates
+/// (move lists live on the stack) and nothing throws: a stop unwinds by returning.
+/// <para>
+/// At each node, in order: no move — a loss; the safe-move bounds (<see cref="BoardSearchOptions.SafeMoveBounds"/>);
+/// the transposition table (exact outcomes, <see cref="OutcomeTable"/>); then the moves, ordered,
+/// until one leaves the opponent lost. A win stores its move; a loss stores the move whose
+/// refutation took the most nodes (the most stubborn defence, for the principal line).
+/// </para>
+/// One instance per thread; instances of one solve share the shape, the table and the stop signal.
+/// </summary>
+public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
+{
+    private const int MaxPly = 72;
+
+    private readonly BoardShape _shape;
+    private readonly OutcomeTable _table;
+    private readonly StopSignal _stop;
+    private readonly Func<bool> _spent;
+    private readonly BoardSearchOptions _options;
+
+    private readonly T[] _board = new T[2];
+    private readonly ulong[] _hash = new ulong[8];
+
+    // Per view: masks for the columns that have a right / left neighbour, the row mask.
+    private readonly T[] _notLastColumn = new T[2], _notFirstColumn = new T[2];
+    private readonly uint[] _rowMask = new uint[2];
+    // Per side and top cell: the bits a move clears in its own view and in the other one.
+    private readonly T[][] _clearOwn = new T[2][], _clearOther = new T[2][];
+
+    private readonly int[][] _history = [new int[128], new int[128]];
+    private readonly int[] _killers = new int[MaxPly * 2];
+
+    public BoardSearch(BoardShape shape, OutcomeTable table, StopSignal stop, BoardSearchOptions options, Func<bool>? spent = null)
+    {
+        _shape = shape;
+        _table = table;
+        _stop = stop;
+        _options = options;
+        _spent = spent ?? (() => false);
+        Array.Fill(_killers, -1);
+        for (int v = 0; v < 2; v++)
+        {
+            int h = shape.Height[v], w = shape.Width[v];
+            _rowMask[v] = w >= 32 ? uint.MaxValue : (1u << w) - 1;
+            T notLast = T.Zero, notFirst = T.Zero;
+            for (int p = 0; p < shape.Cells; p++)
+            {
+                if (p % w != w - 1) notLast |= T.One << p;
+                if (p % w != 0) notFirst |= T.One << p;
+            }
+            _notLastColumn[v] = notLast;
+            _notFirstColumn[v] = notFirst;
+            _clearOwn[v] = new T[shape.Cells];
+            _clearOther[v] = new T[shape.Cells];
+            for (int i = 0; i + w < shape.Cells; i++)
+            {
+                _clearOwn[v][i] = ~((T.One << i) | (T.One << (i + w)));
+                _clearOther[v][i] = ~((T.One << shape.ToOther[v][i]) | (T.One << shape.ToOther[v][i + w]));
+            }
+            _ = h;
+        }
+    }
+
+    /// <summary>Nodes visited by this instance.</summary>
+    public long Nodes { get; private set; }
+
+    public BoardShape Shape => _shape;
+
+    /// <summary>Sets the position: which cells of view 0 (row-major, rows × columns) are empty.</summary>
+    public void SetPosition(ReadOnlySpan<bool> empty)
+    {
+        T v0 = T.Zero, v1 = T.Zero;
+        for (int p = 0; p < _shape.Cells; p++)
+        {
+            if (!empty[p]) continue;
+            v0 |= T.One << p;
+            v1 |= T.One << _shape.ToOther[0][p];
+        }
+        _board[0] = v0;
+        _board[1] = v1;
+        _shape.Hashes(empty).CopyTo(_hash, 0);
+    }
+
+    /// <summary>The empty cells of view 0, for copying the position to another thread's instance.</summary>
+    public bool[] EmptyCells()
+    {
+        var e = new bool[_shape.Cells];
+        for (int p = 0; p < e.Length; p++) e[p] = ((_board[0] >> p) & T.One) != T.Zero;
+        return e;
+    }
+
+    /// <summary>The legal moves of side s (top cells in view s), in search order.</summary>
+    public int[] OrderedMoves(int s)
+    {
+        Span<int> moves = stackalloc int[_shape.Cells];
+        int n = Generate(s, 0, moves);
+        return moves[..n].ToArray();
+    }
+
+    public void Play(int s, int i)
+    {
+        _board[s] &= _clearOwn[s][i];
+        _board[1 - s] &= _clearOther[s][i];
+        var d = _shape.HashDelta[s];
+        int k = i * 8;
+        for (int j = 0; j < 8; j++) _hash[j] ^= d[k + j];
+    }
+
+    /// <summary>Undoes <see cref="Play"/> given the words saved before it.</summary>
+    private void Undo(int s, int i, T own, T other)
+    {
+        _board[s] = own;
+        _board[1 - s] = other;
+        var d = _shape.HashDelta[s];
+        int k = i * 8;
+        for (int j = 0; j < 8; j++) _hash[j] ^= d[k + j];
+    }
+
+    /// <summary>Plays and later takes back a move from outside the search (root threads, principal line).</summary>
+    public (T Own, T Other) Save(int s) => (_board[s], _board[1 - s]);
+
+    public void Restore(int s, int i, (T Own, T Other) saved) => Undo(s, i, saved.Own, saved.Other);
+
+    /// <summary>Whether side s (0 = Left, 1 = Right), to move, wins. False also when stopped; check the stop signal.</summary>
+    public bool Wins(int s) => Wins(s, 0);
+
+    /// <summary>The move a table entry holds for side s to move here, in this orientation, or -1.</summary>
+    public int TableMove(int s, out bool win)
+    {
+        var key = Key(s, out int f);
+        if (_table.TryGet(key, out win, out int m) && m != OutcomeTable.NoMove) return _shape.MirrorMove[s][f][m];
+        return -1;
+    }
+
+    /// <summary>
+    /// Move counts of side s: Possible, its most disjoint moves now (an upper bound on the moves it
+    /// can still make); Safe, disjoint moves the opponent can never take away; Spare, further
+    /// moves disjoint from those safe ones and from each other (each opponent move can spoil at
+    /// most two of them).
+    /// </summary>
+    public (int Possible, int Safe, int Spare) Counts(int s)
+    {
+        int h = _shape.Height[s], w = _shape.Width[s];
+        uint rm = _rowMask[s];
+        T b = _board[s];
+        Span<uint> rows = stackalloc uint[h];
+        Span<uint> safeUsed = stackalloc uint[h];
+        for (int r = 0; r < h; r++) rows[r] = uint.CreateTruncating(b >> (r * w)) & rm;
+        int possible = 0, safe = 0, spare = 0;
+        uint usedP = 0, usedS = 0, usedX = 0;
+        uint prevSafe = rows[0] & ~(rows[0] >> 1) & ~(rows[0] << 1);
+        safeUsed[0] = 0;
+        for (int r = 1; r < h; r++)
+        {
+            uint prev = rows[r - 1], cur = rows[r];
+            // A cell is protected when neither horizontal neighbour is empty: the opponent can never cover it.
+            uint curSafe = cur & ~(cur >> 1) & ~(cur << 1);
+            // Greedy from the top pairs each run of a column into ⌊length/2⌋ dominoes, the most there are.
+            uint t = prev & ~usedP & cur;
+            possible += BitOperations.PopCount(t);
+            usedP = t;
+            uint u = prevSafe & ~usedS & curSafe;
+            safe += BitOperations.PopCount(u);
+            usedS = u;
+            safeUsed[r - 1] |= u;
+            safeUsed[r] = u;
+            prevSafe = curSafe;
+        }
+        for (int r = 1; r < h; r++)
+        {
+            uint x = rows[r - 1] & ~safeUsed[r - 1] & ~usedX & rows[r] & ~safeUsed[r];
+            spare += BitOperations.PopCount(x);
+            usedX = x;
+        }
+        return (possible, safe, spare);
+    }
+
+    /// <summary>
+    /// Moves side s is sure to make however the opponent plays: its safe moves, and of its spare
+    /// moves one in three when it moves first (it plays one, the opponent spoils at most two, and
+    /// so on) or, moving second, one in three of those the opponent's first move leaves.
+    /// </summary>
+    private static int Guaranteed(int safe, int spare, bool movesFirst) =>
+        safe + (movesFirst ? (spare + 2) / 3 : (Math.Max(0, spare - 2) + 2) / 3);
+
+    private ulong Key(int s, out int mirror)
+    {
+        ulong best = _hash[s * 4];
+        mirror = 0;
+        if (!_options.Symmetry) return best;
+        for (int f = 1; f < 4; f++)
+        {
+            ulong h = _hash[s * 4 + f];
+            if (h < best)
+            {
+                best = h;
+                mirror = f;
+            }
+        }
+        return best;
+    }
+
+    private bool Wins(int s, int ply)
+    {
+        Nodes++;
+        if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
+        if (_stop.IsSet) return false;
+        T me = _board[s];
+        int w = _shape.Width[s];
+        if ((me & (me >> w)) == T.Zero) return false;
+        if (_options.SafeMoveBounds)
+        {
+            var (possible, safe, spare) = Counts(s);
+            var (oppPossible, oppSafe, oppSpare) = Counts(1 - s);
+            // The mover's sure moves outlast every move the opponent can still make.
+            if (Guaranteed(safe, spare, movesFirst: true) > oppPossible) return true;
+            // The opponent answers each of the mover's possible moves with one of its sure moves.
+            if (Guaranteed(oppSafe, oppSpare, movesFirst: false) >= possible) return false;
+        }
+        ulong key = Key(s, out int mirror);
+        if (_table.TryGet(key, out bool known, out _)) return known;
+
+        long start = Nodes;
+        Span<int> moves = stackalloc int[_shape.Cells];
+        int n = Generate(s, ply, moves);
+        if (_options.ChildLookup)
+        {
+            var d = _shape.HashDelta[s];
+            int o = (1 - s) * 4;
+            for (int k = 0; k < n; k++)
+            {
+                int i = moves[k], at = i * 8 + o;
+                ulong child = _hash[o] ^ d[at];
+                if (_options.Symmetry)
+                    for (int f = 1; f < 4; f++) child = Math.Min(child, _hash[o + f] ^ d[at + f]);
+                if (_table.TryGet(child, out bool replyWins, out _) && !replyWins)
+                {
+                    _table.Store(key, true, _shape.MirrorMove[s][mirror][i], 1);
+                    return true;
+                }
+            }
+        }
+        int stubborn = -1;
+        long stubbornWork = -1;
+        T other = _board[1 - s];
+        for (int k = 0; k < n; k++)
+        {
+            int i = moves[k];
+            long before = Nodes;
+            Play(s, i);
+            bool replyWins = Wins(1 - s, ply + 1);
+            Undo(s, i, me, other);
+            if (_stop.IsSet) return false;
+            if (!replyWins)
+            {
+                Reward(s, ply, i, Nodes - before);
+                _table.Store(key, true, _shape.MirrorMove[s][mirror][i], Nodes - start);
+                return true;
+            }
+            if (Nodes - before > stubbornWork)
+            {
+                stubbornWork = Nodes - before;
+                stubborn = i;
+            }
+        }
+        _table.Store(key, false, stubborn < 0 ? OutcomeTable.NoMove : _shape.MirrorMove[s][mirror][stubborn], Nodes - start);
+        return false;
+    }
+
+    /// <summary>Score of a proven win in the depth-limited search (minus the plies to reach it).</summary>
+    public const int ProvenWin = 10_000;
+
+    /// <summary>
+    /// Depth-limited negamax score of side s to move, for play where the board cannot be solved:
+    /// proven outcomes (no move, the safe-move bounds, the table) score ±<see cref="ProvenWin"/>;
+    /// at the horizon the evaluation is the same counts, own minus the opponent's
+    /// (possible moves + 3 × safe moves). Moves in the order of the exact search.
+    /// </summary>
+    public int Score(int s, int depth, int alpha, int beta, int ply = 0)
+    {
+        Nodes++;
+        if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
+        if (_stop.IsSet) return 0;
+        T me = _board[s];
+        int w = _shape.Width[s];
+        if ((me & (me >> w)) == T.Zero) return -ProvenWin + ply;
+        var (possible, safe, spare) = Counts(s);
+        var (oppPossible, oppSafe, oppSpare) = Counts(1 - s);
+        if (Guaranteed(safe, spare, movesFirst: true) > oppPossible) return ProvenWin - ply;
+        if (Guaranteed(oppSafe, oppSpare, movesFirst: false) >= possible) return -ProvenWin + ply;
+        if (_table.TryGet(Key(s, out _), out bool known, out _)) return known ? ProvenWin - ply : -ProvenWin + ply;
+        if (depth <= 0) return possible + 3 * safe - oppPossible - 3 * oppSafe;
+        Span<int> moves = stackalloc int[_shape.Cells];
+        int n = Generate(s, ply, moves);
+        T other = _board[1 - s];
+        int best = -ProvenWin - 1;
+        for (int k = 0; k < n; k++)
+        {
+            int i = moves[k];
+            Play(s, i);
+            int v = -Score(1 - s, depth - 1, -beta, -alpha, ply + 1);
+            Undo(s, i, me, other);
+            if (_stop.IsSet) return 0;
+            if (v > best) best = v;
+            if (v > alpha) alpha = v;
+            if (alpha >= beta)
+            {
+                Reward(s, ply, i, 1L << Math.Min(depth, 40));
+                break;
+            }
+        }
+        return best;
+    }
+
+    private void Reward(int s, int ply, int move, long work)
+    {
+        if (!_options.KillersAndHistory) return;
+        int slot = Math.Min(ply, MaxPly - 1) * 2;
+        if (_killers[slot] != move)
+        {
+            _killers[slot + 1] = _killers[slot];
+            _killers[slot] = move;
+        }
+        var h = _history[s];
+        h[move] += 1 + BitOperations.Log2((ulong)Math.Max(1, work));
+        if (h[move] > 1 << 20)
+            for (int j = 0; j < h.Length; j++) h[j] >>= 1;
+    }
+
+    /// <summary>Writes the moves of side s into the span in search order; returns how many.</summary>
+    private int Generate(int s, int ply, Span<int> moves)
+    {
+        T b = _board[s];
+        int w = _shape.Width[s];
+        T tops = b & (b >> w);
+        // Left cells of the opponent's dominoes (horizontal in this view) and the protected cells.
+        T oppPairs = b & (b >> 1) & _notLastColumn[s];
+        T leftPairs = b & (b << 1) & _notFirstColumn[s];
+        T prot = b & ~oppPairs & ~leftPairs;
+        Span<int> keys = stackalloc int[moves.Length];
+        int slot = Math.Min(ply, MaxPly - 1) * 2;
+        int k1 = _killers[slot], k2 = _killers[slot + 1];
+        var hist = _history[s];
+        bool skipSafe = _options.SkipSafeMoves;
+        int n = 0, safeCount = 0;
+        for (T t = tops; t != T.Zero; t &= t - T.One)
+        {
+            int i = int.CreateTruncating(T.TrailingZeroCount(t));
+            int j = i + w;
+            bool safe = Bit(prot, i) && Bit(prot, j);
+            int score = 0;
+            if (_options.CountOrdering)
+            {
+                int oppTaken = Bit(oppPairs, i).AsInt() + Bit(oppPairs, i - 1).AsInt() + Bit(oppPairs, j).AsInt() + Bit(oppPairs, j - 1).AsInt();
+                int ownSpent = Bit(tops, i - w).AsInt() + Bit(tops, j).AsInt();
+                int gain = 2 * oppTaken - ownSpent;
+                if (_options.EvaluationOrdering)
+                {
+                    // The position the move leaves, by the same counts as the bounds.
+                    T ownBefore = _board[s], otherBefore = _board[1 - s];
+                    _board[s] &= _clearOwn[s][i];
+                    _board[1 - s] &= _clearOther[s][i];
+                    var (p1, s1, _) = Counts(s);
+                    var (p2, s2, _) = Counts(1 - s);
+                    _board[s] = ownBefore;
+                    _board[1 - s] = otherBefore;
+                    gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gain;
+                }
+                score = (Math.Clamp(gain, -250, 250) + 256) << 21;
+                if (safe) score = 0;
+            }
+            if (_options.KillersAndHistory)
+            {
+                score += hist[i];
+                if (i == k1) score = int.MaxValue;
+                else if (i == k2) score = int.MaxValue - 1;
+            }
+            if (safe) safeCount++;
+            moves[n] = i;
+            keys[n] = safe && skipSafe ? int.MinValue : score;
+            n++;
+        }
+        // Insertion sort, best first: lists are short and mostly ordered already.
+        for (int a = 1; a < n; a++)
+        {
+            int m = moves[a], key = keys[a], c = a - 1;
+            while (c >= 0 && keys[c] < key)
+            {
+                moves[c + 1] = moves[c];
+                keys[c + 1] = keys[c];
+                c--;
+            }
+            moves[c + 1] = m;
+            keys[c + 1] = key;
+        }
+        // The experiment of skipping safe moves: drop them (sorted last) unless nothing else is left.
+        if (skipSafe && safeCount < n) n -= safeCount;
+        return n;
+    }
+
+    private static bool Bit(T x, int i) => i >= 0 && ((x >> i) & T.One) != T.Zero;
+}
+
+internal static class BoolExtensions
+{
+    public static int AsInt(this bool b) => b ? 1 : 0;
+}

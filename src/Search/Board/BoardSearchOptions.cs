@@ -1,0 +1,50 @@
+namespace Bramble.Search.Board;
+
+/// <summary>
+/// Switches of the whole-board search, one per published ingredient, so that each can be measured
+/// on its own (bench/README.md). The defaults are the combination that measured best.
+/// </summary>
+public sealed record BoardSearchOptions
+{
+    /// <summary>
+    /// Decide a node from move counts before searching it: the side to move wins when its safe
+    /// moves outnumber every move the opponent could still make, and loses when the opponent's
+    /// safe moves are at least as many as its own possible moves (Lachmann, Moore, Rapaport 2002;
+    /// Bullock 2002; Uiterwijk, ICGA J. 37, 2014).
+    /// </summary>
+    public bool SafeMoveBounds { get; init; } = true;
+
+    /// <summary>Positions equal up to a mirror image (and, on square boards, a transposition with the roles swapped) share one table entry.</summary>
+    public bool Symmetry { get; init; } = true;
+
+    /// <summary>Order moves by the opponent's moves they take away and the own moves they spend; safe moves last.</summary>
+    public bool CountOrdering { get; init; } = true;
+
+    /// <summary>
+    /// Order moves by the counts after the move (own possible and safe moves against the
+    /// opponent's), as the evaluation of the position it leaves; costs two counts per move.
+    /// </summary>
+    public bool EvaluationOrdering { get; init; } = true;
+
+    /// <summary>
+    /// Before searching any move, look each child up in the table: one already known lost for
+    /// the opponent wins at once (enhanced transposition cutoff, common practice in chess programs).
+    /// </summary>
+    public bool ChildLookup { get; init; } = true;
+
+    /// <summary>Two killer moves per ply and a history count per move (common practice).</summary>
+    public bool KillersAndHistory { get; init; } = true;
+
+    /// <summary>
+    /// Never search a safe move while the side to move has another move. Off by default: plain
+    /// search finds positions where only the safe move wins (docs/domineering.md), so the rule is
+    /// kept only as a measured experiment.
+    /// </summary>
+    public bool SkipSafeMoves { get; init; }
+
+    /// <summary>Buckets of the transposition table as a power of two (32 bytes each).</summary>
+    public int TableLog2 { get; init; } = 21;
+
+    /// <summary>Threads searching the root moves (sharing the table).</summary>
+    public int Threads { get; init; } = 1;
+}

@@ -1,0 +1,296 @@
+using System.Diagnostics;
+using System.Numerics;
+using Bramble.Rules;
+using Bramble.Rules.Domineering;
+using Bramble.Values;
+
+namespace Bramble.Search.Board;
+
+/// <summary>What a whole-board solve found.</summary>
+/// <param name="Win">Whether the side to move wins; null when the budget ran out first.</param>
+/// <param name="Move">A winning first move when it wins; when it loses, the most stubborn defence (the move whose refutation took the most nodes).</param>
+/// <param name="Line">The principal line from the root: winning moves for the winner, stubborn ones for the loser.</param>
+public sealed record BoardAnswer(bool? Win, Move? Move, long Nodes, long ElapsedMs, IReadOnlyList<Move> Line, int RootMoves, int RootMovesSearched);
+
+/// <summary>Progress of a running solve, for a report on stderr.</summary>
+public readonly record struct BoardProgress(long Nodes, long ElapsedMs, int RootMoveIndex, int RootMoves, Move RootMove);
+
+/// <summary>
+/// Solves whole Domineering boards of up to 128 cells with <see cref="BoardSearch{T}"/>: picks the
+/// word size, splits the root moves over the threads (they share one <see cref="OutcomeTable"/>),
+/// and reads the principal line back from the table. The table is kept between solves of the same
+/// board shape, so the second side to move, and later moves of a game, start from what is known.
+/// </summary>
+public sealed class WholeBoard
+{
+    private OutcomeTable? _table;
+    private BoardShape? _shape;
+
+    public WholeBoard(BoardSearchOptions? options = null) => Options = options ?? new BoardSearchOptions();
+
+    public BoardSearchOptions Options { get; }
+
+    // What a running solve is doing, read by Current from another thread (for progress reports).
+    private Func<long>? _liveNodes;
+    private Stopwatch? _liveClock;
+    private int _liveRoot = -1;
+    private int[]? _liveMoves;
+    private int _liveSide;
+
+    /// <summary>The table of the last shape solved (for saving and resuming).</summary>
+    public OutcomeTable? Table => _table;
+
+    /// <summary>Whether the board fits the bitboards (at most 128 cells).</summary>
+    public static bool Fits(Rules.Domineering.Board board) => board.Rows * board.Columns <= 128;
+
+    public BoardAnswer Solve(DomineeringPosition position, Side toMove, Func<bool>? spent = null)
+    {
+        var board = position.Board;
+        if (!Fits(board)) throw new ArgumentException("the whole-board search takes boards of at most 128 cells", nameof(position));
+        if (_shape is null || _shape.Rows != board.Rows || _shape.Columns != board.Columns)
+        {
+            _shape = new BoardShape(board.Rows, board.Columns);
+            _table = new OutcomeTable(Options.TableLog2);
+        }
+        var empty = new bool[_shape.Cells];
+        for (int r = 0; r < board.Rows; r++)
+            for (int c = 0; c < board.Columns; c++)
+                empty[r * board.Columns + c] = board.IsEmpty(r, c);
+        return _shape.Cells <= 64
+            ? Run<ulong>(_shape, _table!, empty, toMove, spent)
+            : Run<UInt128>(_shape, _table!, empty, toMove, spent);
+    }
+
+    /// <summary>
+    /// Play where the board cannot be solved in time: iterative deepening of the depth-limited
+    /// search (<see cref="BoardSearch{T}.Score"/>) until <paramref name="spent"/> says stop; the
+    /// best root move of the last finished depth (the first move when not even depth 1 finished).
+    /// </summary>
+    public (Move Move, int Depth, int Score, long Nodes) Play(DomineeringPosition position, Side toMove, Func<bool> spent)
+    {
+        var board = position.Board;
+        var shape = _shape is not null && _shape.Rows == board.Rows && _shape.Columns == board.Columns ? _shape : new BoardShape(board.Rows, board.Columns);
+        if (!ReferenceEquals(shape, _shape))
+        {
+            _shape = shape;
+            _table = new OutcomeTable(Options.TableLog2);
+        }
+        var empty = new bool[shape.Cells];
+        for (int r = 0; r < board.Rows; r++)
+            for (int c = 0; c < board.Columns; c++)
+                empty[r * board.Columns + c] = board.IsEmpty(r, c);
+        return shape.Cells <= 64 ? Deepen<ulong>(shape, empty, toMove, spent) : Deepen<UInt128>(shape, empty, toMove, spent);
+    }
+
+    private (Move, int, int, long) Deepen<T>(BoardShape shape, bool[] empty, Side toMove, Func<bool> spent) where T : unmanaged, IBinaryInteger<T>
+    {
+        int s = toMove == Side.Left ? 0 : 1;
+        var stop = new StopSignal();
+        var search = new BoardSearch<T>(shape, _table!, stop, Options, spent);
+        search.SetPosition(empty);
+        var moves = search.OrderedMoves(s).ToList();
+        if (moves.Count == 0) throw new InvalidOperationException("no move to play");
+        int bestMove = moves[0], bestScore = int.MinValue, depth = 0;
+        for (int d = 0; d < shape.Cells / 2 && !stop.IsSet; d++)
+        {
+            int alpha = -BoardSearch<T>.ProvenWin - 1, iterationBest = -1, iterationScore = int.MinValue;
+            foreach (int m in moves)
+            {
+                var saved = search.Save(s);
+                search.Play(s, m);
+                int v = -search.Score(1 - s, d, -BoardSearch<T>.ProvenWin - 1, -alpha);
+                search.Restore(s, m, saved);
+                if (stop.IsSet) break;
+                if (v > iterationScore)
+                {
+                    iterationScore = v;
+                    iterationBest = m;
+                }
+                if (v > alpha) alpha = v;
+            }
+            if (stop.IsSet) break;
+            (bestMove, bestScore, depth) = (iterationBest, iterationScore, d + 1);
+            // The best move first at the next depth; a proven result needs no deeper look.
+            moves.Remove(bestMove);
+            moves.Insert(0, bestMove);
+            if (Math.Abs(bestScore) >= BoardSearch<T>.ProvenWin - shape.Cells) break;
+        }
+        return (ToMove(shape, s, bestMove), depth, bestScore, search.Nodes);
+    }
+
+    /// <summary>What the running solve is doing (nodes, time, the root move being searched), or null between solves.</summary>
+    public BoardProgress? Current
+    {
+        get
+        {
+            var (nodes, clock, moves, shape) = (_liveNodes, _liveClock, _liveMoves, _shape);
+            if (nodes is null || clock is null || moves is null || shape is null) return null;
+            int k = Math.Clamp(Volatile.Read(ref _liveRoot), 0, moves.Length - 1);
+            return new BoardProgress(nodes(), clock.ElapsedMilliseconds, k, moves.Length, ToMove(shape, _liveSide, moves[k]));
+        }
+    }
+
+    private const string TableMagic = "bramble-board-table/1";
+
+    /// <summary>Writes the board shape and the table, so that a later solve of the same board can resume from it.</summary>
+    public void SaveTable(Stream stream)
+    {
+        if (_shape is null || _table is null) throw new InvalidOperationException("nothing solved yet");
+        using var w = new BinaryWriter(stream, System.Text.Encoding.UTF8, leaveOpen: true);
+        w.Write(TableMagic);
+        w.Write(_shape.Rows);
+        w.Write(_shape.Columns);
+        _table.Save(w);
+    }
+
+    /// <summary>Reads a table written by <see cref="SaveTable"/>; the next solve of a board of that shape starts from it.</summary>
+    public void LoadTable(Stream stream)
+    {
+        using var r = new BinaryReader(stream, System.Text.Encoding.UTF8, leaveOpen: true);
+        string magic = r.ReadString();
+        if (magic != TableMagic) throw new InvalidDataException($"not a saved board table (it starts with '{magic}')");
+        int rows = r.ReadInt32(), columns = r.ReadInt32();
+        var shape = new BoardShape(rows, columns);
+        var table = new OutcomeTable(Options.TableLog2);
+        table.Load(r);
+        (_shape, _table) = (shape, table);
+    }
+
+    private BoardAnswer Run<T>(BoardShape shape, OutcomeTable table, bool[] empty, Side toMove, Func<bool>? spent)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        var clock = Stopwatch.StartNew();
+        var stop = new StopSignal();
+        int s = toMove == Side.Left ? 0 : 1;
+        var main = new BoardSearch<T>(shape, table, stop, Options, spent);
+        main.SetPosition(empty);
+        var rootMoves = main.OrderedMoves(s);
+        if (rootMoves.Length == 0) return new BoardAnswer(false, null, 1, clock.ElapsedMilliseconds, [], 0, 0);
+
+        int threads = Math.Clamp(Options.Threads, 1, rootMoves.Length);
+        var searchers = new BoardSearch<T>[threads];
+        searchers[0] = main;
+        for (int t = 1; t < threads; t++)
+        {
+            searchers[t] = new BoardSearch<T>(shape, table, stop, Options, spent);
+            searchers[t].SetPosition(empty);
+        }
+        int next = -1, winner = -1, searched = 0;
+        var work = new long[rootMoves.Length];
+        _liveNodes = () => searchers.Sum(x => x?.Nodes ?? 0);
+        _liveClock = clock;
+        _liveMoves = rootMoves;
+        _liveSide = s;
+
+        void Worker(int t)
+        {
+            var search = searchers[t];
+            while (!stop.IsSet)
+            {
+                int k = Interlocked.Increment(ref next);
+                if (k >= rootMoves.Length) return;
+                Volatile.Write(ref _liveRoot, k);
+                long before = search.Nodes;
+                var saved = search.Save(s);
+                search.Play(s, rootMoves[k]);
+                bool replyWins = search.Wins(1 - s);
+                search.Restore(s, rootMoves[k], saved);
+                work[k] = search.Nodes - before;
+                if (stop.IsSet) return;
+                Interlocked.Increment(ref searched);
+                if (!replyWins)
+                {
+                    Interlocked.CompareExchange(ref winner, k, -1);
+                    stop.Set();
+                    return;
+                }
+            }
+        }
+
+        if (threads == 1) Worker(0);
+        else
+        {
+            var pool = new Thread[threads];
+            for (int t = 0; t < threads; t++)
+            {
+                int id = t;
+                // A deep recursion on a big board needs more than the default stack.
+                pool[t] = new Thread(() => Worker(id), 64 << 20) { IsBackground = true };
+                pool[t].Start();
+            }
+            foreach (var th in pool) th.Join();
+        }
+        _liveNodes = null;
+        long nodes = searchers.Sum(x => x.Nodes);
+        bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
+        if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
+
+        int best = winner >= 0 ? winner : Array.IndexOf(work, work.Max());
+        // The line is read with a fresh signal: the one above may have been set by the winning thread.
+        var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
+        reader.SetPosition(empty);
+        var line = PrincipalLine(reader, shape, s, rootMoves[best]);
+        nodes += reader.Nodes;
+        return new BoardAnswer(win, ToMove(shape, s, rootMoves[best]), nodes, clock.ElapsedMilliseconds, line, rootMoves.Length, searched);
+    }
+
+    /// <summary>
+    /// The line from the root: the first move given, then at each node the winner's winning move
+    /// (from the table, checked, or found again) and the loser's stored most stubborn defence.
+    /// </summary>
+    private static List<Move> PrincipalLine<T>(BoardSearch<T> search, BoardShape shape, int s, int first)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        var line = new List<Move> { ToMove(shape, s, first) };
+        search.Play(s, first);
+        int side = 1 - s;
+        for (int ply = 1; ply < shape.Cells / 2 + 1; ply++)
+        {
+            var moves = search.OrderedMoves(side);
+            if (moves.Length == 0) break;
+            bool win = search.Wins(side);
+            int move = search.TableMove(side, out _);
+            if (win)
+            {
+                if (move < 0 || !Leaves(search, side, move, lost: true))
+                {
+                    move = -1;
+                    foreach (int m in moves)
+                        if (Leaves(search, side, m, lost: true)) { move = m; break; }
+                }
+            }
+            else if (move < 0 || Array.IndexOf(moves, move) < 0) move = moves[0];
+            if (move < 0) break;
+            line.Add(ToMove(shape, side, move));
+            search.Play(side, move);
+            side = 1 - side;
+        }
+        return line;
+    }
+
+    private static bool Leaves<T>(BoardSearch<T> search, int side, int move, bool lost) where T : unmanaged, IBinaryInteger<T>
+    {
+        var saved = search.Save(side);
+        search.Play(side, move);
+        bool replyWins = search.Wins(1 - side);
+        search.Restore(side, move, saved);
+        return lost ? !replyWins : replyWins;
+    }
+
+    /// <summary>A top cell of view s as a board move: view 0 is the board, view 1 its transpose.</summary>
+    public static Move ToMove(BoardShape shape, int s, int cell)
+    {
+        int r, c;
+        if (s == 0)
+        {
+            r = cell / shape.Columns;
+            c = cell % shape.Columns;
+        }
+        else
+        {
+            r = cell % shape.Rows;
+            c = cell / shape.Rows;
+        }
+        return new Move(CellName.Index(r, c));
+    }
+}

@@ -1,0 +1,24 @@
+using System.Collections.Concurrent;
+using Bramble.Rules;
+
+namespace Bramble.Web;
+
+/// <summary>
+/// Value contexts lent to requests one at a time (a context, like its game store, is not
+/// thread-safe). Keeping them between requests keeps their memo of component values, so after a
+/// move only the component that changed is worked out again. A context whose store has grown
+/// past a limit is dropped rather than returned, which bounds the memory a long session uses.
+/// </summary>
+public sealed class ContextPool
+{
+    private const int StoreLimit = 1_000_000;
+    private readonly ConcurrentBag<ValueContext> _free = new();
+
+    public ValueContext Rent() => _free.TryTake(out var context) ? context : new ValueContext();
+
+    public void Return(ValueContext context)
+    {
+        context.Cancellation = CancellationToken.None;
+        if (context.Store.Count < StoreLimit && _free.Count < 8) _free.Add(context);
+    }
+}

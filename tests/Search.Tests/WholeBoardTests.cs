@@ -1,0 +1,150 @@
+using Bramble.Rules;
+using Bramble.Rules.Domineering;
+using Bramble.Search.Board;
+using Bramble.Search.Tests.Support;
+using Bramble.Values;
+
+namespace Bramble.Search.Tests;
+
+/// <summary>
+/// The bitboard search of whole Domineering boards: every shortcut (safe-move bounds, symmetric
+/// table entries, move ordering) cross-checked against plain search written in the tests, on
+/// random small boards with holes; and the published outcome classes of empty rectangles.
+/// </summary>
+public class WholeBoardTests
+{
+    private static readonly IRuleset Rules = Rulesets.Get("domineering");
+
+    /// <summary>Random rectangles of 1 to 5 rows and columns with about a fifth of the cells filled.</summary>
+    private static IEnumerable<DomineeringPosition> RandomBoards(int seed, int count, int maxSide = 5)
+    {
+        var rnd = new Random(seed);
+        for (int n = 0; n < count; n++)
+        {
+            int rows = rnd.Next(1, maxSide + 1), columns = rnd.Next(1, maxSide + 1);
+            var text = string.Join("/", Enumerable.Range(0, rows).Select(_ =>
+                new string(Enumerable.Range(0, columns).Select(_ => rnd.NextDouble() < 0.2 ? '#' : '.').ToArray())));
+            yield return (DomineeringPosition)Rules.Parse(text);
+        }
+    }
+
+    private static void AgreesWithPlainSearch(BoardSearchOptions options, int seed, int count)
+    {
+        var brute = new BruteForce();
+        var solver = new WholeBoard(options with { TableLog2 = 12 });
+        foreach (var position in RandomBoards(seed, count))
+        {
+            foreach (var side in new[] { Side.Left, Side.Right })
+            {
+                var answer = solver.Solve(position, side);
+                bool wins = brute.Wins(position, side);
+                // Plain search (BruteForce, written in the tests) decides the outcome.
+                Assert.True(answer.Win == wins, $"{side.Word()} first on {position.Text}: says {answer.Win}, plain search {wins}");
+                if (!wins) continue;
+                var after = position.Play(side, answer.Move!.Value);
+                Assert.False(brute.Wins(after, side.Other()), $"{position.FormatMove(answer.Move.Value)} on {position.Text} does not win");
+                // Every move of the principal line is legal, and the winner's moves in it win.
+                IPosition p = position;
+                var mover = side;
+                foreach (var m in answer.Line)
+                {
+                    var next = p.Play(mover, m);
+                    if (mover == side) Assert.False(brute.Wins(next, mover.Other()), $"line move {p.FormatMove(m)} on {p.Text} does not win");
+                    p = next;
+                    mover = mover.Other();
+                }
+            }
+        }
+    }
+
+    [Fact]
+    public void DefaultSearchAgreesWithPlainSearchOnRandomBoardsWithHoles() => AgreesWithPlainSearch(new BoardSearchOptions(), 1901, 1500);
+
+    [Fact]
+    public void SafeMoveBoundsAloneAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { Symmetry = false, CountOrdering = false, KillersAndHistory = false }, 1902, 800);
+
+    [Fact]
+    public void SymmetricTableEntriesAloneAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { SafeMoveBounds = false, CountOrdering = false, KillersAndHistory = false }, 1903, 800);
+
+    [Fact]
+    public void OrderingAloneAgreesWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { SafeMoveBounds = false, Symmetry = false }, 1904, 500);
+
+    [Fact]
+    public void TwoThreadsAgreeWithPlainSearch() => AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2 }, 1905, 300);
+
+    [Fact]
+    public void SkippingSafeMovesAgreesWithPlainSearch() =>
+        // Never searching a safe move while another move is left (Bullock 2002 states that safe moves can be ignored).
+        AgreesWithPlainSearch(new BoardSearchOptions { SkipSafeMoves = true }, 1906, 1500);
+
+    [Fact]
+    public void SkippingSafeMovesWithoutBoundsAgreesWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { SkipSafeMoves = true, SafeMoveBounds = false }, 1907, 800);
+
+    /// <summary>
+    /// Empty rectangles and their outcome classes. Sources: m×3 won by Vertical, 2k×n (n = 3, 5, 7)
+    /// won by Vertical, 3×n (n &gt; 3) won by Horizontal, m×2k won by Horizontal for m = 5 and for
+    /// m = 3, 7 with k &gt; 1 — Uiterwijk, "Perfectly solving Domineering boards", CGW 2013 (CCIS 408,
+    /// 2014), all with Vertical first; Horizontal first on m×n is Vertical first on n×m with the
+    /// roles swapped. 2×2 is ±1: Lachmann, Moore, Rapaport, MSRI Publ. 42 (2002).
+    /// </summary>
+    public static TheoryData<int, int, Outcome> Rectangles()
+    {
+        var data = new TheoryData<int, int, Outcome>();
+        for (int m = 2; m <= 7; m++)
+            for (int n = 2; n <= 7; n++)
+            {
+                var v = VerticalFirst(m, n);
+                var h = VerticalFirst(n, m);
+                if (v is null || h is null) continue;
+                data.Add(m, n, OutcomeExtensions.FromWinners(v.Value ? Side.Left : Side.Right, h.Value ? Side.Right : Side.Left));
+            }
+        return data;
+    }
+
+    /// <summary>True when Vertical moving first wins m×n by the theorems of Uiterwijk (CGW 2013), false when Horizontal does, null when they do not say.</summary>
+    private static bool? VerticalFirst(int m, int n)
+    {
+        if (m == 2 && n == 2) return true; // ±1 (Lachmann, Moore, Rapaport 2002)
+        if (n == 3) return true; // every m×3 board, m > 1
+        if (m % 2 == 0 && (n == 5 || n == 7)) return true; // 2k×n, n = 3, 5, 7
+        if (m == 3 && n > 3) return false; // 3×n, n > 3
+        if (n % 2 == 0 && (m == 5 || ((m == 3 || m == 7) && n >= 4))) return false; // m×2k
+        return null;
+    }
+
+    [Theory]
+    [MemberData(nameof(Rectangles))]
+    public void EmptyRectanglesHaveTheirPublishedOutcomeClass(int m, int n, Outcome published)
+    {
+        var position = (DomineeringPosition)Rules.Parse($"{m}x{n}");
+        var solver = new WholeBoard(new BoardSearchOptions { TableLog2 = 18 });
+        var left = solver.Solve(position, Side.Left);
+        var right = solver.Solve(position, Side.Right);
+        var outcome = OutcomeExtensions.FromWinners(left.Win!.Value ? Side.Left : Side.Right, right.Win!.Value ? Side.Right : Side.Left);
+        // Published class: see Rectangles and VerticalFirst for the source of each.
+        Assert.Equal(published, outcome);
+    }
+
+    [Theory]
+    // 5×5 is a second-player win, 6×6 a first-player win: the m×n table of
+    // Breuker, Uiterwijk, van den Herik, "Solving 8×8 Domineering", TCS 230 (2000) — from memory,
+    // agreeing with the class reported for these boards by the decomposition search of this project.
+    [InlineData(5, 5, Outcome.P)]
+    [InlineData(6, 6, Outcome.N)]
+    public void SquaresHaveTheirPublishedOutcomeClass(int m, int n, Outcome published) => EmptyRectanglesHaveTheirPublishedOutcomeClass(m, n, published);
+
+    [Fact]
+    public void PerfectPlayerUsesTheWholeBoardSearchOnBigBoards()
+    {
+        var position = Rules.Parse("6x6");
+        var d = new PerfectPlayer().Choose(position, Side.Left, TimeSpan.FromMinutes(2));
+        // 6×6 is a first-player win (as above); the line starts with the chosen move.
+        Assert.True(d.Exact);
+        Assert.True(d.Winning);
+        Assert.Equal(position.FormatMove(d.Move!.Value), d.Line![0]);
+    }
+}
