@@ -237,14 +237,14 @@ public static class MatchVerb
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
-                Console.Error.WriteLine($"match merge: cannot read {path}: {e.Message}");
-                return Entry.BadInput;
+                Console.Error.WriteLine($"{verb}: cannot read {path}: {e.Message}");
+                return null;
             }
             // Text with no game record in it at all (its one line unreadable) is some other file, not a journal cut short.
             if (contents.Records.Count == 0 && contents.Notice is not null)
             {
-                Console.Error.WriteLine($"match merge: {path} is not a journal: it holds no game record");
-                return Entry.BadInput;
+                Console.Error.WriteLine($"{verb}: {path} is not a journal: it holds no game record");
+                return null;
             }
             read.Add((path, contents));
         }
