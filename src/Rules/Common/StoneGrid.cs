@@ -53,14 +53,14 @@ public sealed class StoneGrid
 
     private static StoneGrid ParseSize(string text, int i)
     {
-        int rows = ReadNumber(text, ref i, "a number of rows");
+        int rows = NotationNumber.Read(text, ref i, "a number of rows");
         while (i < text.Length && (text[i] == ' ' || text[i] == '\t')) i++;
         if (i >= text.Length || (text[i] != 'x' && text[i] != 'X' && text[i] != '×'))
             throw new PositionSyntaxException(text, i, "'x' between the numbers of rows and columns, as in 5x6");
         i++;
         while (i < text.Length && (text[i] == ' ' || text[i] == '\t')) i++;
         int columnsAt = i;
-        int columns = ReadNumber(text, ref i, "a number of columns");
+        int columns = NotationNumber.Read(text, ref i, "a number of columns");
         while (i < text.Length && char.IsWhiteSpace(text[i])) i++;
         if (i < text.Length) throw new PositionSyntaxException(text, i, "the end of the board size");
         if (rows < 1 || rows > MaxRows) throw new PositionSyntaxException(text, 0, $"between 1 and {MaxRows} rows");
@@ -70,19 +70,6 @@ public sealed class StoneGrid
             for (int c = 0; c < columns; c++)
                 cells[r * columns + c] = (r + c) % 2 == 0 ? Stone.Left : Stone.Right;
         return new StoneGrid(rows, columns, cells);
-    }
-
-    private static int ReadNumber(string text, ref int i, string expected)
-    {
-        int from = i;
-        long n = 0;
-        while (i < text.Length && char.IsAsciiDigit(text[i]))
-        {
-            n = Math.Min(n * 10 + (text[i] - '0'), int.MaxValue);
-            i++;
-        }
-        if (i == from) throw new PositionSyntaxException(text, i, expected);
-        return (int)n;
     }
 
     private static Stone? Read(char ch) => ch switch

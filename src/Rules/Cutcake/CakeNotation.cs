@@ -1,3 +1,5 @@
+using Bramble.Rules.Common;
+
 namespace Bramble.Rules.Cutcake;
 
 /// <summary>
@@ -40,14 +42,14 @@ public static class CakeNotation
     private static (int, int) ReadSize(string text, ref int i)
     {
         int rowsAt = i;
-        int rows = ReadNumber(text, ref i, Example);
+        int rows = NotationNumber.Read(text, ref i, Example);
         Skip(text, ref i);
         if (i >= text.Length || (text[i] != 'x' && text[i] != 'X' && text[i] != '×'))
             throw new PositionSyntaxException(text, i, "'x' between the numbers of rows and columns, as in 3x4");
         i++;
         Skip(text, ref i);
         int columnsAt = i;
-        int columns = ReadNumber(text, ref i, "a number of columns");
+        int columns = NotationNumber.Read(text, ref i, "a number of columns");
         if (rows < 1 || rows > MaxSide) throw new PositionSyntaxException(text, rowsAt, $"between 1 and {MaxSide} rows");
         if (columns < 1 || columns > MaxSide) throw new PositionSyntaxException(text, columnsAt, $"between 1 and {MaxSide} columns");
         return (rows, columns);
@@ -76,19 +78,6 @@ public static class CakeNotation
             rows++;
             if (ch != '/' && ch != '\n') return (rows, width);
         }
-    }
-
-    private static int ReadNumber(string text, ref int i, string expected)
-    {
-        int from = i;
-        long n = 0;
-        while (i < text.Length && char.IsAsciiDigit(text[i]))
-        {
-            n = Math.Min(n * 10 + (text[i] - '0'), int.MaxValue);
-            i++;
-        }
-        if (i == from) throw new PositionSyntaxException(text, i, expected);
-        return (int)n;
     }
 
     private static void Skip(string text, ref int i)
