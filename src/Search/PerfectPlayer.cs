@@ -63,7 +63,8 @@ public sealed class PerfectPlayer : IPlayer
         if (position.Moves(side).Count == 0)
             return new Decision(null, 0, b.ElapsedMs, Exact: true, Value: TryValueText(position, b), Winning: false);
 
-        if (Settings.WholeBoard && position is DomineeringPosition board && WholeBoard.Fits(board.Board)
+        // The whole-board search counts its own nodes, so a decision with a node cap keeps to the decomposition search.
+        if (Settings.WholeBoard && Settings.NodeCap == long.MaxValue && position is DomineeringPosition board && WholeBoard.Fits(board.Board)
             && position.Components().Any(c => c.Size > Settings.ExactSize))
         {
             // Half the time for the exact search, the rest for the depth-limited one if that fails.

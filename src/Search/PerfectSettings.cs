@@ -37,7 +37,7 @@ public sealed record PerfectSettings
     /// <summary>
     /// Domineering boards of at most 128 cells with a component over <see cref="ExactSize"/> go to
     /// the bitboard search of the whole board (<see cref="Board.WholeBoard"/>) instead of the
-    /// decomposition search.
+    /// decomposition search (unless <see cref="NodeCap"/> is set: node caps belong to the decomposition search).
     /// </summary>
     public bool WholeBoard { get; init; } = true;
 
