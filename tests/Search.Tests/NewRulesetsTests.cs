@@ -35,7 +35,7 @@ public class NewRulesetsTests
                 var b = alphabeta.Choose(position, side, Plenty);
                 Assert.True(a.Exact && b.Exact, $"{text}: a search did not finish");
                 Assert.True(a.Winning == b.Winning, $"{rulesetName} {text}, {side.Word()} first: perfect {a.Winning}, alphabeta {b.Winning}");
-                // The outcome class says who wins with each side starting (SPEC.md §1 letters).
+                // The outcome class says who wins with each side starting (the outcome letters L, R, N, P of docs/cli.md).
                 bool firstWins = side == Side.Left ? outcome is Outcome.L or Outcome.N : outcome is Outcome.R or Outcome.N;
                 Assert.True(firstWins == a.Winning, $"{rulesetName} {text}, {side.Word()} first: value says {firstWins}");
             }

@@ -12,7 +12,7 @@ public class ClobberTests
     [Fact]
     public void OneStoneOfEachColourIsStar()
     {
-        // CHECKS-style worked example, derived from the definitions: each side's only move leaves a lone stone, 0.
+        // Worked example, derived from the definitions: each side's only move leaves a lone stone, 0.
         Assert.Equal(_context.Store.Star, V("xo"));
         Assert.Equal(_context.Store.Star, V("o/x"));
     }
