@@ -10,33 +10,17 @@ namespace Bramble.Rules.Konane;
 /// <c>from-to</c>, e.g. <c>c3-c7</c> for a double jump (<see cref="Move.A"/> and
 /// <see cref="Move.B"/> are the two squares, row * columns + column).
 /// </summary>
-public sealed class KonanePosition : IPosition
+public sealed class KonanePosition : StonePosition
 {
-    private static readonly (int Dr, int Dc)[] s_steps = [(-1, 0), (1, 0), (0, -1), (0, 1)];
-    private readonly KonaneRuleset _ruleset;
     private IReadOnlyList<int[]>? _clusters;
 
-    internal KonanePosition(KonaneRuleset ruleset, StoneGrid grid)
+    internal KonanePosition(KonaneRuleset ruleset, StoneGrid grid) : base(ruleset, grid)
     {
-        _ruleset = ruleset;
-        Grid = grid;
-        Text = grid.Text;
-        Hash = TextHash.Of(Text);
     }
 
-    public StoneGrid Grid { get; }
+    protected override string MoveExample => "c3-c5";
 
-    public IRuleset Ruleset => _ruleset;
-
-    public string Text { get; }
-
-    public ulong Hash { get; }
-
-    public int Size => Grid.StoneCount;
-
-    private bool Inside(int r, int c) => r >= 0 && r < Grid.Rows && c >= 0 && c < Grid.Columns;
-
-    public IReadOnlyList<Move> Moves(Side side)
+    public override IReadOnlyList<Move> Moves(Side side)
     {
         var mine = StoneGrid.Of(side);
         var theirs = StoneGrid.Opponent(mine);
@@ -45,7 +29,7 @@ public sealed class KonanePosition : IPosition
             for (int c = 0; c < Grid.Columns; c++)
             {
                 if (Grid.At(r, c) != mine) continue;
-                foreach (var (dr, dc) in s_steps)
+                foreach (var (dr, dc) in Steps)
                 {
                     // Each landing square along the line is a move of its own: the jumper may stop after any jump.
                     int jr = r + dr, jc = c + dc;
@@ -61,14 +45,9 @@ public sealed class KonanePosition : IPosition
         return moves;
     }
 
-    public IPosition Play(Side side, Move move)
+    public override IPosition Play(Side side, Move move)
     {
-        int cells = Grid.Rows * Grid.Columns;
-        if (move.A < 0 || move.A >= cells || move.B < 0 || move.B >= cells)
-            throw new IllegalMoveException($"{FormatMove(move)}: off the {Grid.Rows}x{Grid.Columns} board");
-        var mine = StoneGrid.Of(side);
-        if (Grid[move.A] != mine)
-            throw new IllegalMoveException($"{FormatMove(move)} is not a legal move for {side.Word()}: {Grid.CellName(move.A)} holds no {(side == Side.Left ? "x" : "o")} stone");
+        var mine = CheckMover(side, move);
         int r0 = move.A / Grid.Columns, c0 = move.A % Grid.Columns, r1 = move.B / Grid.Columns, c1 = move.B % Grid.Columns;
         int distance = Math.Abs(r1 - r0) + Math.Abs(c1 - c0);
         if ((r0 != r1 && c0 != c1) || distance == 0 || distance % 2 != 0)
@@ -86,15 +65,7 @@ public sealed class KonanePosition : IPosition
         }
         next[move.A] = Stone.None;
         next[move.B] = mine;
-        return new KonanePosition(_ruleset, new StoneGrid(Grid.Rows, Grid.Columns, next));
-    }
-
-    public string FormatMove(Move move) => $"{Grid.CellName(move.A)}-{Grid.CellName(move.B)}";
-
-    public Move ParseMove(string text)
-    {
-        var (from, to) = Grid.ReadMove(text, "c3-c5");
-        return new Move(from, to);
+        return new KonanePosition((KonaneRuleset)Ruleset, new StoneGrid(Grid.Rows, Grid.Columns, next));
     }
 
     /// <summary>
@@ -147,24 +118,17 @@ public sealed class KonanePosition : IPosition
         {
             int r = cell / Grid.Columns, c = cell % Grid.Columns;
             var theirs = StoneGrid.Opponent(Grid[cell]);
-            foreach (var (dr, dc) in s_steps)
+            foreach (var (dr, dc) in Steps)
                 if (Inside(r + 2 * dr, c + 2 * dc) && Grid.At(r + dr, c + dc) == theirs && Grid.At(r + 2 * dr, c + 2 * dc) == Stone.None) return true;
         }
         return false;
     }
 
-    public IReadOnlyList<IPosition> Components()
+    public override IReadOnlyList<IPosition> Components()
     {
         var clusters = Clusters;
         if (clusters.Count == 1 && clusters[0].Length == Grid.StoneCount) return [this];
-        return clusters.Select(cluster => (IPosition)new KonanePosition(_ruleset, Keep(cluster))).ToArray();
-    }
-
-    private StoneGrid Keep(int[] cluster)
-    {
-        var cells = new Stone[Grid.Rows * Grid.Columns];
-        foreach (int cell in cluster) cells[cell] = Grid[cell];
-        return new StoneGrid(Grid.Rows, Grid.Columns, cells);
+        return clusters.Select(cluster => (IPosition)new KonanePosition((KonaneRuleset)Ruleset, Keep(cluster))).ToArray();
     }
 
     /// <summary>
@@ -173,17 +137,11 @@ public sealed class KonanePosition : IPosition
     /// part of the key and one it cannot reach is not), under the eight symmetries of the square
     /// and the exchange of colours (see <see cref="StoneGrid.SignedKey"/>).
     /// </summary>
-    public string NormalKey => ComponentValues.JoinKeys(Clusters.Select(KeyOf));
+    public override string NormalKey => ComponentValues.JoinKeys(Clusters.Select(KeyOf));
 
     private string KeyOf(int[] cluster)
     {
-        int top = int.MaxValue, bottom = -1, left = int.MaxValue, right = -1;
-        foreach (int cell in cluster)
-        {
-            int r = cell / Grid.Columns, c = cell % Grid.Columns;
-            top = Math.Min(top, r); bottom = Math.Max(bottom, r);
-            left = Math.Min(left, c); right = Math.Max(right, c);
-        }
+        var (top, left, bottom, right) = BoundingBox(cluster);
         int margin = cluster.Length - 1;
         top = Math.Max(0, top - margin);
         left = Math.Max(0, left - margin);
