@@ -131,7 +131,9 @@ public static class MatchVerb
             Fresh = demo && !resume,
             Shard = shard,
             Parallel = parallel,
-            CreateFolders = createFolders,
+            // The built-in demo writes to results/ in the working folder (outside the installed
+            // program's matches/), a place this program chose and documents, so it may make it.
+            CreateFolders = createFolders || demo,
             Database = db?.FullName,
             Progress = progress,
             Log = Log.Logger,
