@@ -41,7 +41,7 @@ public sealed class TerminalGame(IPosition start, Side human, Side firstMover, I
         _mover = firstMover;
         _position = start;
         _board = new PlayBoard(start);
-        output.WriteLine($"You play {human.Word()} ({Colour(human)}); the engine plays {human.Other().Word()} with {engine.Name}. Type 'help' for commands.");
+        output.WriteLine($"You play {human.Word()}{Role(start.Ruleset.Name, human)}; the engine plays {human.Other().Word()} with {engine.Name}. Type 'help' for commands.");
         while (true)
         {
             var result = PlayOneGame();
@@ -260,5 +260,19 @@ public sealed class TerminalGame(IPosition start, Side human, Side firstMover, I
         }
     }
 
-    private static string Colour(Side side) => side == Side.Left ? "blue / vertical" : "red / horizontal";
+    /// <summary>What a side's pieces are called in the rulesets whose players know them by name; nothing for the rest.</summary>
+    private static string Role(string ruleset, Side side) => (ruleset, side) switch
+    {
+        ("hackenbush", Side.Left) => " (blue edges, and green)",
+        ("hackenbush", Side.Right) => " (red edges, and green)",
+        ("domineering", Side.Left) => " (vertical dominoes)",
+        ("domineering", Side.Right) => " (horizontal dominoes)",
+        ("clobber" or "konane", Side.Left) => " (the x stones)",
+        ("clobber" or "konane", Side.Right) => " (the o stones)",
+        ("toads-and-frogs", Side.Left) => " (the toads, T)",
+        ("toads-and-frogs", Side.Right) => " (the frogs, F)",
+        ("cutcake", Side.Left) => " (cuts between columns)",
+        ("cutcake", Side.Right) => " (cuts between rows)",
+        _ => "",
+    };
 }
