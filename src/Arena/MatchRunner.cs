@@ -319,7 +319,7 @@ public sealed class MatchRunner(MatchSpec spec, MatchOptions options)
         {
             foreach (var engine in engines)
             {
-                var seed = GameSeed.For(matchSeed, game.Id, engine.PlayerId);
+                var seed = PerGameChance.For(matchSeed, game.Id, engine.PlayerId);
                 try
                 {
                     await engine.Client.SetAsync("seed", seed.ToString(System.Globalization.CultureInfo.InvariantCulture), options.Timeouts.Reply, cancel).ConfigureAwait(false);

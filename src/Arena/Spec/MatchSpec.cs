@@ -35,7 +35,7 @@ public sealed record MatchSpec
 
     /// <summary>
     /// When set, every player is sent <c>set seed</c> before each game, with a seed made from this one,
-    /// the game's id and the player's id (<see cref="Schedule.GameSeed"/>); null sends none.
+    /// the game's id and the player's id (<see cref="Schedule.PerGameChance"/>); null sends none.
     /// </summary>
     public long? Seed { get; init; }
 

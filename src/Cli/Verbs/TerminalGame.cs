@@ -25,7 +25,7 @@ public sealed class TerminalGame(IPosition start, Side human, Side firstMover, I
           quit            leave the game
         """;
 
-    /// <summary>Repeat each line read after its prompt (set when the input is a pipe, so a transcript reads as a dialogue).</summary>
+    /// <summary>Repeat each line read after its prompt (set when the input is a pipe, so the saved output reads as a dialogue).</summary>
     public bool EchoInput { get; init; }
 
     private readonly Stack<(IPosition Position, Side Mover)> _history = new();

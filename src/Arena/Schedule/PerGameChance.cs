@@ -7,7 +7,7 @@ namespace Bramble.Arena.Schedule;
 /// the ones before it on that engine; a seed per game makes each game depend on itself alone,
 /// whatever <c>--parallel</c>, shard or resumed run plays it.
 /// </summary>
-public static class GameSeed
+public static class PerGameChance
 {
     public static int For(long matchSeed, int gameId, string playerId)
     {
