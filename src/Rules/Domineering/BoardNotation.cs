@@ -1,4 +1,5 @@
 using System.Text;
+using Bramble.Rules.Common;
 
 namespace Bramble.Rules.Domineering;
 
@@ -19,31 +20,18 @@ public static class BoardNotation
 
     private static Board ParseSize(string text, int i)
     {
-        int rows = ReadNumber(text, ref i, "a number of rows");
+        int rows = NotationNumber.Read(text, ref i, "a number of rows");
         SkipBlanks(text, ref i);
         if (i >= text.Length || (text[i] != 'x' && text[i] != 'X')) throw new PositionSyntaxException(text, i, "'x' between the numbers of rows and columns, as in 6x7");
         i++;
         SkipBlanks(text, ref i);
         int columnsAt = i;
-        int columns = ReadNumber(text, ref i, "a number of columns");
+        int columns = NotationNumber.Read(text, ref i, "a number of columns");
         while (i < text.Length && char.IsWhiteSpace(text[i])) i++;
         if (i < text.Length) throw new PositionSyntaxException(text, i, "the end of the board size");
         if (rows < 1 || rows > Board.MaxRows) throw new PositionSyntaxException(text, 0, $"between 1 and {Board.MaxRows} rows");
         if (columns < 1 || columns > Board.MaxColumns) throw new PositionSyntaxException(text, columnsAt, $"between 1 and {Board.MaxColumns} columns");
         return Board.Empty(rows, columns);
-    }
-
-    private static int ReadNumber(string text, ref int i, string expected)
-    {
-        int from = i;
-        long n = 0;
-        while (i < text.Length && char.IsAsciiDigit(text[i]))
-        {
-            n = Math.Min(n * 10 + (text[i] - '0'), int.MaxValue);
-            i++;
-        }
-        if (i == from) throw new PositionSyntaxException(text, i, expected);
-        return (int)n;
     }
 
     private static void SkipBlanks(string text, ref int i)
