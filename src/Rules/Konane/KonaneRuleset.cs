@@ -63,4 +63,7 @@ public sealed class KonaneRuleset : IRuleset, IComponentCatalogue
                 }
             }
     }
+
+    /// <summary>A stored key is the part of the board its group can use: counted by its squares, as the list is.</summary>
+    public int CatalogueSize(IPosition component) => component is KonanePosition k ? k.Grid.Rows * k.Grid.Columns : component.Size;
 }

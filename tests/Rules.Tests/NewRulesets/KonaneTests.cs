@@ -67,6 +67,84 @@ public class KonaneTests
     }
 
     [Fact]
+    public void NoStoneEverLeavesItsGroupsBoxWidenedByHalfItsStones()
+    {
+        // Derived from the rules (the proof is in docs/konane.md): a group of n stones left to itself
+        // never puts a stone more than ⌊n/2⌋ rows or columns beyond its bounding box. Checked here by
+        // walking every sequence of moves of either side (a player may always play elsewhere in a sum),
+        // with the jumps written in the test, on random groups in the middle of a wide empty board.
+        var random = new Random(95);
+        int attained = 0;
+        for (int i = 0; i < 300; i++)
+        {
+            int n = random.Next(2, 8), h = random.Next(1, 4), w = random.Next(1, 4);
+            int margin = n;
+            int rows = h + 2 * margin, columns = w + 2 * margin;
+            var grid = Enumerable.Range(0, rows).Select(_ => new char[columns].Select(_ => '.').ToArray()).ToArray();
+            for (int k = 0; k < n; k++) grid[margin + random.Next(h)][margin + random.Next(w)] = "xo"[random.Next(2)];
+            int stones = grid.Sum(r => r.Count(c => c != '.'));
+            int top = int.MaxValue, bottom = -1, left = int.MaxValue, right = -1;
+            for (int r = 0; r < rows; r++)
+                for (int c = 0; c < columns; c++)
+                    if (grid[r][c] != '.') { top = Math.Min(top, r); bottom = Math.Max(bottom, r); left = Math.Min(left, c); right = Math.Max(right, c); }
+            string start = string.Join("/", grid.Select(r => new string(r)));
+            var seen = new HashSet<string> { start };
+            var queue = new Queue<string>([start]);
+            int farthest = 0;
+            while (queue.Count > 0)
+            {
+                var text = queue.Dequeue();
+                var lines = text.Split('/');
+                for (int r = 0; r < rows; r++)
+                    for (int c = 0; c < columns; c++)
+                        if (lines[r][c] != '.')
+                            farthest = Math.Max(farthest, Math.Max(Math.Max(top - r, r - bottom), Math.Max(left - c, c - right)));
+                foreach (var side in new[] { Side.Left, Side.Right })
+                    foreach (var next in PlainGame.StoneOptions(text, side, konane: true))
+                        if (seen.Add(next)) queue.Enqueue(next);
+            }
+            Assert.True(farthest <= stones / 2, $"{start}: a stone went {farthest} beyond the box with {stones} stones");
+            if (farthest == stones / 2 && farthest > 0) attained++;
+        }
+        // The bound is reached by some groups (so it is not loose by a wide margin).
+        Assert.True(attained > 0);
+    }
+
+    [Fact]
+    public void GroupsNearEachOtherOnBoardsWithEdgesMatchPlainSearch()
+    {
+        // Common practice: the split and the keys, which use the reach bounds, checked against plain search
+        // of the whole board on random two-dimensional boards with groups at every distance from each other and
+        // from the edges.
+        var plain = new PlainGame(_context.Store, (t, s) => PlainGame.StoneOptions(t, s, konane: true));
+        var random = new Random(1993);
+        int split = 0;
+        for (int i = 0; i < 600; i++)
+        {
+            int h = random.Next(2, 6), w = random.Next(5, 11);
+            var grid = Enumerable.Range(0, h).Select(_ => Enumerable.Repeat('.', w).ToArray()).ToArray();
+            int groups = random.Next(1, 4);
+            for (int g = 0; g < groups; g++)
+            {
+                int r0 = random.Next(h), c0 = random.Next(w);
+                for (int k = random.Next(1, 4); k > 0; k--)
+                {
+                    int r = Math.Clamp(r0 + random.Next(-1, 2), 0, h - 1), c = Math.Clamp(c0 + random.Next(-1, 2), 0, w - 1);
+                    grid[r][c] = "xo"[random.Next(2)];
+                }
+            }
+            string text = string.Join("/", grid.Select(r => new string(r)));
+            var position = _rules.Parse(text);
+            var value = _rules.Value(position, _context);
+            Assert.True(plain.Value(text) == value, text);
+            var parts = position.Components();
+            if (parts.Count > 1) split++;
+            Assert.True(_context.Store.Sum(parts.Select(c => plain.Value(c.Text))) == value, text);
+        }
+        Assert.True(split > 60, $"only {split} boards split");
+    }
+
+    [Fact]
     public void MovesJumpAlongALineAndMayStopAfterAnyJump()
     {
         var p = _rules.Parse("xo.o.");
