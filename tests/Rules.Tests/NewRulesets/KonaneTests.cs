@@ -119,19 +119,22 @@ public class KonaneTests
         var plain = new PlainGame(_context.Store, (t, s) => PlainGame.StoneOptions(t, s, konane: true));
         var random = new Random(1993);
         int split = 0;
-        for (int i = 0; i < 600; i++)
+        for (int i = 0; i < 2000; i++)
         {
             int h = random.Next(2, 6), w = random.Next(5, 11);
             var grid = Enumerable.Range(0, h).Select(_ => Enumerable.Repeat('.', w).ToArray()).ToArray();
-            int groups = random.Next(1, 4);
+            int groups = random.Next(2, 4);
             for (int g = 0; g < groups; g++)
             {
-                int r0 = random.Next(h), c0 = random.Next(w);
-                for (int k = random.Next(1, 4); k > 0; k--)
-                {
-                    int r = Math.Clamp(r0 + random.Next(-1, 2), 0, h - 1), c = Math.Clamp(c0 + random.Next(-1, 2), 0, w - 1);
-                    grid[r][c] = "xo"[random.Next(2)];
-                }
+                // A pair of opposing stones side by side (often able to jump), and sometimes a third stone by them.
+                int r0 = random.Next(h), c0 = random.Next(w - 1);
+                bool across = random.Next(2) == 0 || h < 2;
+                if (!across) r0 = random.Next(h - 1);
+                char first = "xo"[random.Next(2)];
+                grid[r0][c0] = first;
+                grid[across ? r0 : r0 + 1][across ? c0 + 1 : c0] = first == 'x' ? 'o' : 'x';
+                if (random.Next(2) == 0)
+                    grid[Math.Clamp(r0 + random.Next(-1, 2), 0, h - 1)][Math.Clamp(c0 + random.Next(-1, 3), 0, w - 1)] = "xo"[random.Next(2)];
             }
             string text = string.Join("/", grid.Select(r => new string(r)));
             var position = _rules.Parse(text);
@@ -141,7 +144,7 @@ public class KonaneTests
             if (parts.Count > 1) split++;
             Assert.True(_context.Store.Sum(parts.Select(c => plain.Value(c.Text))) == value, text);
         }
-        Assert.True(split > 60, $"only {split} boards split");
+        Assert.True(split > 150, $"only {split} boards split");
     }
 
     [Fact]

@@ -62,6 +62,20 @@ public class ToadsAndFrogsTests
     }
 
     [Fact]
+    public void EricksonsConjecturesE2AndE3ForThreeEmptySquares()
+    {
+        // Erickson's conjectures as restated by Thanatipanonda, "Further hopping with Toads and Frogs",
+        // Electronic J. Combinatorics 18 (2011): "E2: T^a □□□ FF = {a − 2 | a − 2} for all a ≥ 2." and
+        // "E3: T^a □□□ FFF = a − 7/2 for all a ≥ 5." (The retrieved text lost the □ symbols; three empty
+        // squares is the count these values fit — two squares is E1's family, whose values differ — and
+        // the same paper lists T^a □□□ FFF among the families it settles.)
+        for (int a = 2; a <= 9; a++)
+            Assert.True(G($"{{{a - 2}|{a - 2}}}") == V($"T^{a}□□□FF"), $"T^{a}□□□FF");
+        for (int a = 5; a <= 9; a++)
+            Assert.True(G($"{2 * a - 7}/2") == V($"T^{a}□□□FFF"), $"T^{a}□□□FFF");
+    }
+
+    [Fact]
     public void RandomStripsMatchPlainSearchSplitExactlyAndMirrorToTheNegative()
     {
         var plain = new PlainGame(_context.Store, PlainGame.StripOptions);
