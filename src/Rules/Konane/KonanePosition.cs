@@ -89,9 +89,34 @@ public sealed class KonanePosition : StonePosition
 
     private int[][] FindClusters()
     {
+        // Orthogonal neighbours always may meet, so the merging starts from the connected groups
+        // (the fixpoint is the same from any start finer than it: merging only ever adds).
         var clusters = new List<Cluster>();
-        for (int cell = 0; cell < Grid.Rows * Grid.Columns; cell++)
-            if (Grid[cell] != Stone.None) clusters.Add(new Cluster(cell, Grid.Columns));
+        int cells = Grid.Rows * Grid.Columns;
+        var owner = new Cluster?[cells];
+        var stack = new Stack<int>();
+        for (int start = 0; start < cells; start++)
+        {
+            if (Grid[start] == Stone.None || owner[start] is not null) continue;
+            var cluster = new Cluster(start, Grid.Columns);
+            owner[start] = cluster;
+            stack.Push(start);
+            while (stack.Count > 0)
+            {
+                int cell = stack.Pop();
+                int r = cell / Grid.Columns, c = cell % Grid.Columns;
+                foreach (var (dr, dc) in Steps)
+                {
+                    if (!Inside(r + dr, c + dc)) continue;
+                    int next = Grid.Index(r + dr, c + dc);
+                    if (Grid[next] == Stone.None || owner[next] is not null) continue;
+                    owner[next] = cluster;
+                    cluster.Add(next, Grid.Columns);
+                    stack.Push(next);
+                }
+            }
+            clusters.Add(cluster);
+        }
         bool merged = true;
         while (merged)
         {
@@ -134,6 +159,15 @@ public sealed class KonanePosition : StonePosition
         public int Bottom { get; private set; }
         public int Left { get; private set; }
         public int Right { get; private set; }
+
+        public void Add(int cell, int columns)
+        {
+            Cells.Add(cell);
+            Top = Math.Min(Top, cell / columns);
+            Bottom = Math.Max(Bottom, cell / columns);
+            Left = Math.Min(Left, cell % columns);
+            Right = Math.Max(Right, cell % columns);
+        }
 
         public void Absorb(Cluster other)
         {
