@@ -70,13 +70,14 @@ public static class ComposeVerb
     {
         ComposeStop.RuledOut => ": no position of this ruleset has this value (see the note)",
         _ when r.LeastSize > r.Bound => $": a position of this value has at least {r.LeastSize} {r.SizeUnit} (its birthday), more than the bound {r.Bound}",
+        ComposeStop.Bound when !r.Sampled && r.Restricted => $": no listed position of up to {r.Bound} {r.SizeUnit} has this value (see the note)",
         ComposeStop.Bound when !r.Sampled => $": no position of up to {r.Bound} {r.SizeUnit} has this value",
         _ => "",
     };
 
     private static string Searched(ComposeReport r)
     {
-        var what = r.Sampled ? "sampled components" : "every position";
+        var what = r.Sampled ? "sampled components" : r.Restricted ? "every listed position (see the note)" : "every position";
         var range = r.SearchedThrough < r.LeastSize
             ? $"sizes below {r.LeastSize} ruled out by the birthday bound; no size looked at in full"
             : $"{what} of up to {r.SearchedThrough} {r.SizeUnit} (sizes below {r.LeastSize} ruled out by the birthday bound)";
@@ -113,6 +114,7 @@ public static class ComposeVerb
             ["bound"] = r.Bound,
             ["searched_through"] = r.SearchedThrough,
             ["sampled"] = r.Sampled,
+            ["restricted"] = r.Restricted,
             ["components_tried"] = r.ComponentsTried,
             ["sums_tried"] = r.SumsTried,
             ["elapsed_ms"] = r.ElapsedMs,
