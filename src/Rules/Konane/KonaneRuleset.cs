@@ -12,7 +12,7 @@ namespace Bramble.Rules.Konane;
 /// exchange of colours (negatives). Positions are given as they stand: the opening removals of
 /// the traditional game are made by the players before the position is written down.
 /// </summary>
-public sealed class KonaneRuleset : IRuleset, IComponentCatalogue
+public sealed class KonaneRuleset : IRuleset, IComponentCatalogue, IComposable
 {
     public string Name => "konane";
 
@@ -66,4 +66,23 @@ public sealed class KonaneRuleset : IRuleset, IComponentCatalogue
 
     /// <summary>A stored key is the part of the board its group can use: counted by its squares, as the list is.</summary>
     public int CatalogueSize(IPosition component) => component is KonanePosition k ? k.Grid.Rows * k.Grid.Columns : component.Size;
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    // Compose counts stones (a position's size); the database lists boards by squares.
+    string IComposable.SizeUnit => "stones";
+
+    public int ListingLimit => 8;
+
+    public bool ListsEveryComponent => false;
+
+    public int DefaultSearchSize => 6;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => KonaneComposition.ComponentsOfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) => KonaneComposition.SumOf(this, components);
+
+    public int LeastSize(Game target, GameStore store) => KonaneComposition.LeastSize(target, store);
+
+    public TargetFacts Facts(Game target, GameStore store) => KonaneComposition.Facts();
 }
