@@ -28,7 +28,7 @@ public static class DbVerb
         // Another spelling, kept working for scripts but not shown.
         var size = new Option<int?>("--size") { Description = "Same as --cells", Hidden = true };
         var output = new Option<FileInfo>("--out") { Description = "Database file to write (merged with it when it already is one)", Required = true, HelpName = "FILE" };
-        var command = new Command("build", "Precompute the values of every component up to N cells (edges, squares: the ruleset's unit)") { ruleset, cells, size, output };
+        var command = new Command("build", "Precompute the values of every component up to size N (cells, squares or stones: the ruleset's unit)") { ruleset, cells, size, output };
         command.SetAction(parse => Failures.Guard(() =>
         {
             int n = parse.GetValue(cells) ?? parse.GetValue(size) ?? throw new InputException("db build: --cells N is required (cells for domineering, edges for hackenbush)");
