@@ -114,6 +114,91 @@ public class MatchReportTests
     }
 
     [Fact]
+    public void EveryGameAndBlunderLinksToItsReplayOnTheBoard()
+    {
+        var records = new List<GameRecord>
+        {
+            Game(11, "pruner", "windfall", Side.Left, "BRB + G(B,R)", Side.Left, Side.Left, (2, "windfall")),
+            Game(12, "windfall", "pruner", Side.Right, "[B0-1,R1-2,G2-0] + BRR", Side.Right, Side.Left, (1, "windfall"), (3, "pruner")),
+        };
+        var folder = Path.Combine(Path.GetTempPath(), $"bramble-report-{Guid.NewGuid():N}");
+        Directory.CreateDirectory(folder);
+        try
+        {
+            var journal = Path.Combine(folder, "orchard.jsonl");
+            File.WriteAllLines(journal, records.Select(JournalFormat.Write));
+            var page = Path.Combine(folder, "report.html");
+            var (exit, _, err) = ConsoleRunner.Run("match", "report", journal, "--out", page, "--board", "http://127.0.0.1:9000/");
+            Assert.True(exit == 0, err);
+            var html = File.ReadAllText(page);
+            var doc = XDocument.Parse(html[html.IndexOf("<html", StringComparison.Ordinal)..]);
+            XNamespace x = "http://www.w3.org/1999/xhtml";
+
+            // The link's fragment (docs/matches.md, "The report"): ply=N&journal=<the journal line>.
+            (GameRecord Game, int? Ply) Follow(XElement a)
+            {
+                var href = a.Attribute("href")!.Value;
+                Assert.StartsWith("http://127.0.0.1:9000/#", href);
+                var fields = System.Web.HttpUtility.ParseQueryString(href[(href.IndexOf('#') + 1)..]);
+                return (JournalFormat.Parse(fields["journal"]!), fields["ply"] is { } ply ? int.Parse(ply) : null);
+            }
+
+            // Each blunder row opens its own game at the blunder's ply.
+            var rows = doc.Descendants(x + "tr").Where(t => t.Attribute("data-ply") is not null).ToList();
+            Assert.Equal(3, rows.Count);
+            foreach (var row in rows)
+            {
+                var (game, ply) = Follow(row.Descendants(x + "a").Single(a => a.Attribute("class")?.Value == "replay"));
+                var record = records.Single(r => r.Game.ToString() == row.Attribute("data-game")!.Value);
+                Assert.Equal(JournalFormat.Write(record), JournalFormat.Write(game));
+                Assert.Equal(row.Attribute("data-ply")!.Value, ply.ToString());
+            }
+            // Each game in the list opens itself from the start.
+            var details = doc.Descendants(x + "details").ToList();
+            Assert.Equal(2, details.Count);
+            foreach (var (d, record) in details.Zip(records))
+            {
+                var (game, ply) = Follow(d.Descendants(x + "a").Single(a => a.Attribute("class")?.Value == "replay"));
+                Assert.Equal(JournalFormat.Write(record), JournalFormat.Write(game));
+                Assert.Null(ply);
+            }
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    [Fact]
+    public void TheReportLinksToTheBoardsUsualAddressByDefault()
+    {
+        var folder = Path.Combine(Path.GetTempPath(), $"bramble-report-{Guid.NewGuid():N}");
+        Directory.CreateDirectory(folder);
+        try
+        {
+            var journal = Path.Combine(folder, "orchard.jsonl");
+            File.WriteAllLines(journal, [JournalFormat.Write(Game(1, "pruner", "windfall", Side.Left, "BRB", Side.Left, Side.Left))]);
+            var page = Path.Combine(folder, "report.html");
+            var (exit, _, err) = ConsoleRunner.Run("match", "report", journal, "--out", page);
+            Assert.True(exit == 0, err);
+            // bramble serve's default port (docs/cli.md, serve).
+            Assert.Contains("href=\"http://127.0.0.1:8421/#journal=", File.ReadAllText(page));
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    [Fact]
+    public void ABoardAddressThatIsNotAWebAddressIsBadInput()
+    {
+        var (exit, _, err) = ConsoleRunner.Run("match", "report", "/nonexistent/orchard.jsonl", "--out", "/dev/null", "--board", "somewhere");
+        Assert.Equal(2, exit);
+        Assert.Contains("--board somewhere", err);
+    }
+
+    [Fact]
     public void AMissingJournalIsBadInput()
     {
         var (exit, _, err) = ConsoleRunner.Run("match", "report", "/nonexistent/orchard.jsonl", "--out", "/dev/null");

@@ -177,16 +177,22 @@ public static class MatchVerb
         var journals = new Argument<string[]>("journals") { Description = "Journals of one match (e.g. its shards)", Arity = ArgumentArity.OneOrMore };
         var output = new Option<string>("--out") { Description = "The HTML file to write", Required = true, HelpName = "FILE" };
         var specFile = new Option<string?>("--spec") { Description = "The match file: its title, player order and SPRT (the journal does not carry them)", HelpName = "FILE" };
+        var board = new Option<string?>("--board") { Description = $"The browser board's address, for the links that replay each game there (default {Bramble.Web.ReplayLink.DefaultBoard}: bramble serve on this computer)", HelpName = "URL" };
         var command = new Command("report", "Write one self-contained HTML page about a match: standings, ratings, crosstable, SPRT, positions, blunders, games")
         {
-            journals, output, specFile,
+            journals, output, specFile, board,
         };
-        command.SetAction(parse => WriteReport(parse.GetValue(journals) ?? [], parse.GetValue(output)!, parse.GetValue(specFile)));
+        command.SetAction(parse => WriteReport(parse.GetValue(journals) ?? [], parse.GetValue(output)!, parse.GetValue(specFile), parse.GetValue(board)));
         return command;
     }
 
-    private static int WriteReport(string[] journals, string output, string? specPath)
+    private static int WriteReport(string[] journals, string output, string? specPath, string? board)
     {
+        if (board is not null && !(Uri.TryCreate(board, UriKind.Absolute, out var address) && (address.Scheme == Uri.UriSchemeHttp || address.Scheme == Uri.UriSchemeHttps)))
+        {
+            Console.Error.WriteLine($"match report: --board {board}: give the board's address as http://HOST:PORT/");
+            return Entry.BadInput;
+        }
         if (ReadAndMerge(journals, "match report") is not var (records, _)) return Entry.BadInput;
         MatchSpec? spec = null;
         if (specPath is not null)
@@ -202,7 +208,7 @@ public static class MatchVerb
             }
         }
         var title = spec?.Title ?? $"Match report: {string.Join(", ", journals.Select(Path.GetFileName))}";
-        var page = ReportPage.Render(title, records, spec?.Sprt, spec?.Players.Select(p => p.Id).ToList());
+        var page = ReportPage.Render(title, records, spec?.Sprt, spec?.Players.Select(p => p.Id).ToList(), board);
         try
         {
             File.WriteAllText(output, page);
