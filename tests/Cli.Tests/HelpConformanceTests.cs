@@ -80,19 +80,19 @@ public partial class HelpConformanceTests
     public void MatchSubcommandsShowOnlyTheirOwnArguments(string sub)
     {
         var help = Help("match", sub);
-        // The match file is the parent's argument; the subcommand takes journals.
-        Assert.Contains($" match {sub} <journals>...", help);
-        Assert.DoesNotContain("[<spec>]", help);
-        Assert.DoesNotMatch(@"(?m)^\s+<spec>", help);
-        Assert.Matches(@"(?m)^\s+<journals>", help);
+        // The match file is the parent's argument; the subcommand takes journals (docs/cli.md, synopsis).
+        Assert.Contains($" match {sub} <journal>...", help);
+        Assert.DoesNotContain("[<spec.json>]", help);
+        Assert.DoesNotMatch(@"(?m)^\s+<spec", help);
+        Assert.Matches(@"(?m)^\s+<journal>", help);
     }
 
     [Fact]
     public void MatchItselfStillShowsItsSpecArgument()
     {
         var help = Help("match");
-        Assert.Contains(" match [<spec>] [command]", help);
-        Assert.Matches(@"(?m)^\s+<spec>\s", help);
+        Assert.Contains(" match [<spec.json>] [command]", help);
+        Assert.Matches(@"(?m)^\s+<spec\.json>\s", help);
     }
 
     [Fact]

@@ -24,7 +24,7 @@ public static class SubcommandHelp
         {
             if (lines[i].TrimEnd('\r') != "Usage:" || i + 1 >= lines.Count) continue;
             foreach (var a in foreign)
-                foreach (var label in new[] { $" [<{a.Name}>]", $" <{a.Name}>..." , $" <{a.Name}>" })
+                foreach (var label in new[] { $" [<{a.Name}>]", $" <{a.Name}>...", $" <{a.Name}>" })
                 {
                     // Only before the subcommand's own name: its own arguments may come after it.
                     int own = lines[i + 1].IndexOf(" " + command.Name, StringComparison.Ordinal);

@@ -22,7 +22,7 @@ public static class MatchVerb
 
     public static Command Build()
     {
-        var spec = new Argument<string?>("spec") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
+        var spec = new Argument<string?>("spec.json") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
         var resume = new Option<bool>("--resume") { Description = "Continue the journal, skipping the games it holds" };
         var shard = new Option<string?>("--shard") { Description = "K/N: play only the games whose id ≡ K (mod N), into a journal of their own (e.g. 0/4)", HelpName = "K/N" };
         var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)", HelpName = "N" };
@@ -42,7 +42,7 @@ public static class MatchVerb
 
     private static Command BuildMerge()
     {
-        var journals = new Argument<string[]>("journals") { Description = "Journals to merge (e.g. the shards of one match)", Arity = ArgumentArity.OneOrMore };
+        var journals = new Argument<string[]>("journal") { Description = "Journals to merge (e.g. the shards of one match)", Arity = ArgumentArity.OneOrMore };
         var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
         var output = new Option<string?>("--out") { Description = "Also write the merged journal to this file", HelpName = "FILE" };
         var command = new Command("merge", "Merge shard journals and print the standings") { journals, json, output };
@@ -174,7 +174,7 @@ public static class MatchVerb
 
     private static Command BuildReport()
     {
-        var journals = new Argument<string[]>("journals") { Description = "Journals of one match (e.g. its shards)", Arity = ArgumentArity.OneOrMore };
+        var journals = new Argument<string[]>("journal") { Description = "Journals of one match (e.g. its shards)", Arity = ArgumentArity.OneOrMore };
         var output = new Option<string>("--out") { Description = "The HTML file to write", Required = true, HelpName = "FILE" };
         var specFile = new Option<string?>("--spec") { Description = "The match file: its title, player order and SPRT (the journal does not carry them)", HelpName = "FILE" };
         var board = new Option<string?>("--board") { Description = $"The browser board's address, for the links that replay each game there (default {Bramble.Web.ReplayLink.DefaultBoard}: bramble serve on this computer)", HelpName = "URL" };
