@@ -14,6 +14,12 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool SafeMoveBounds { get; init; } = true;
 
+    /// <summary>
+    /// Count protective 2×2 areas in the safe-move bounds (Bullock 2002): a side that plays into one
+    /// gets a safe move beside it, and the opponent can spoil it only with a move inside it.
+    /// </summary>
+    public bool ProtectiveBlocks { get; init; } = true;
+
     /// <summary>Positions equal up to a mirror image (and, on square boards, a transposition with the roles swapped) share one table entry.</summary>
     public bool Symmetry { get; init; } = true;
 
@@ -31,6 +37,13 @@ public sealed record BoardSearchOptions
     /// the opponent wins at once (enhanced transposition cutoff, common practice in chess programs).
     /// </summary>
     public bool ChildLookup { get; init; } = true;
+
+    /// <summary>
+    /// Apply the safe-move bounds to each child while ordering (the evaluation ordering counts the
+    /// position after every move anyway): a move the bounds call won is played at once, a move
+    /// they call lost is never searched. Same answers; the children are not visited as nodes.
+    /// </summary>
+    public bool ChildBounds { get; init; } = true;
 
     /// <summary>Two killer moves per ply and a history count per move (common practice).</summary>
     public bool KillersAndHistory { get; init; } = true;
