@@ -42,6 +42,7 @@ public static class BoardAblation
             ("no-child-lookup", all with { ChildLookup = false }),
             ("no-killers-history", all with { KillersAndHistory = false }),
             ("no-blocks", all with { ProtectiveBlocks = false }),
+            ("no-lone-spares", all with { LoneSpares = false }),
             ("no-child-bounds", all with { ChildBounds = false }),
             ("skip-safe", all with { SkipSafeMoves = true }),
         };

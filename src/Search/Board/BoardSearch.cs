@@ -146,9 +146,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     /// 2×2 areas (two side-by-side pairs that form a run of exactly two across, in both rows: a move in
     /// one column leaves the other column safe, and the only opponent moves touching it lie inside
     /// it — Bullock 2002); Spare, further moves disjoint from all those and from each other (each
-    /// opponent move can spoil at most two of them).
+    /// opponent move can spoil at most two of them); Lone, the spares that no opponent move can
+    /// spoil together with another (counted apart from Spare).
     /// </summary>
-    public (int Possible, int Safe, int Blocks, int Spare) Counts(int s)
+    public (int Possible, int Safe, int Blocks, int Lone, int Spare) Counts(int s)
     {
         int h = _shape.Height[s], w = _shape.Width[s];
         uint rm = _rowMask[s];
@@ -190,13 +191,32 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 prevRun2 = curRun2;
             }
         }
+        Span<uint> spareCells = stackalloc uint[h];
+        Span<uint> spareTops = stackalloc uint[h];
+        spareCells[0] = 0;
         for (int r = 1; r < h; r++)
         {
             uint x = rows[r - 1] & ~used[r - 1] & ~usedX & rows[r] & ~used[r];
             spare += BitOperations.PopCount(x);
             usedX = x;
+            spareCells[r - 1] |= x;
+            spareCells[r] = x;
+            spareTops[r - 1] = x;
         }
-        return (possible, safe, blocks, spare);
+        int lone = 0;
+        if (_options.LoneSpares && spare > 0)
+        {
+            // A spare none of whose cells has another spare's cell beside it across: an opponent
+            // move that spoils it spoils nothing else (safe cells and blocks never stand beside a spare).
+            for (int r = 0; r + 1 < h; r++)
+            {
+                uint top = spareTops[r];
+                if (top == 0) continue;
+                uint beside = (spareCells[r] << 1) | (spareCells[r] >> 1) | (spareCells[r + 1] << 1) | (spareCells[r + 1] >> 1);
+                lone += BitOperations.PopCount(top & ~beside);
+            }
+        }
+        return (possible, safe, blocks, lone, spare - lone);
     }
 
     /// <summary>The first cells of the runs of exactly two empty cells across a row.</summary>
@@ -206,8 +226,8 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     /// Moves side s is sure to make however the opponent plays: its safe moves, plus what it wins
     /// in the race for its blocks and spare moves (<see cref="SureMoves"/>).
     /// </summary>
-    private int Guaranteed(int safe, int blocks, int spare, bool movesFirst) =>
-        safe + _sure.Get(blocks, spare, movesFirst);
+    private int Guaranteed(int safe, int blocks, int lone, int spare, bool movesFirst) =>
+        safe + _sure.Get(blocks, lone, spare, movesFirst);
 
     private readonly SureMoves _sure = SureMoves.Shared;
     private ulong Key(int s, out int mirror)
@@ -237,12 +257,12 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         if ((me & (me >> w)) == T.Zero) return false;
         if (_options.SafeMoveBounds)
         {
-            var (possible, safe, blocks, spare) = Counts(s);
-            var (oppPossible, oppSafe, oppBlocks, oppSpare) = Counts(1 - s);
+            var (possible, safe, blocks, lone, spare) = Counts(s);
+            var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
             // The mover's sure moves outlast every move the opponent can still make.
-            if (Guaranteed(safe, blocks, spare, movesFirst: true) > oppPossible) return true;
+            if (Guaranteed(safe, blocks, lone, spare, movesFirst: true) > oppPossible) return true;
             // The opponent answers each of the mover's possible moves with one of its sure moves.
-            if (Guaranteed(oppSafe, oppBlocks, oppSpare, movesFirst: false) >= possible) return false;
+            if (Guaranteed(oppSafe, oppBlocks, oppLone, oppSpare, movesFirst: false) >= possible) return false;
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;
@@ -321,10 +341,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         T me = _board[s];
         int w = _shape.Width[s];
         if ((me & (me >> w)) == T.Zero) return -ProvenWin + ply;
-        var (possible, safe, blocks, spare) = Counts(s);
-        var (oppPossible, oppSafe, oppBlocks, oppSpare) = Counts(1 - s);
-        if (Guaranteed(safe, blocks, spare, movesFirst: true) > oppPossible) return ProvenWin - ply;
-        if (Guaranteed(oppSafe, oppBlocks, oppSpare, movesFirst: false) >= possible) return -ProvenWin + ply;
+        var (possible, safe, blocks, lone, spare) = Counts(s);
+        var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
+        if (Guaranteed(safe, blocks, lone, spare, movesFirst: true) > oppPossible) return ProvenWin - ply;
+        if (Guaranteed(oppSafe, oppBlocks, oppLone, oppSpare, movesFirst: false) >= possible) return -ProvenWin + ply;
         if (_table.TryGet(Key(s, out _), out bool known, out _)) return known ? ProvenWin - ply : -ProvenWin + ply;
         if (depth <= 0) return possible + 3 * safe - oppPossible - 3 * oppSafe;
         Span<int> moves = stackalloc int[_shape.Cells];
@@ -406,16 +426,16 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                     T ownBefore = _board[s], otherBefore = _board[1 - s];
                     _board[s] &= _clearOwn[s][i];
                     _board[1 - s] &= _clearOther[s][i];
-                    var (p1, s1, b1, x1) = Counts(s);
-                    var (p2, s2, b2, x2) = Counts(1 - s);
+                    var (p1, s1, b1, v1, x1) = Counts(s);
+                    var (p2, s2, b2, v2, x2) = Counts(1 - s);
                     _board[s] = ownBefore;
                     _board[1 - s] = otherBefore;
                     gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gain;
                     if (judge)
                     {
                         // The very tests the child would make first (Wins), settled here without visiting it.
-                        verdict = p2 == 0 || Guaranteed(s1, b1, x1, movesFirst: false) >= p2 ? (sbyte)1
-                            : Guaranteed(s2, b2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
+                        verdict = p2 == 0 || Guaranteed(s1, b1, v1, x1, movesFirst: false) >= p2 ? (sbyte)1
+                            : Guaranteed(s2, b2, v2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
                     }
                 }
                 score = (Math.Clamp(gain, -250, 250) + 256) << 21;

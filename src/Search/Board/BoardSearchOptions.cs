@@ -20,6 +20,12 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool ProtectiveBlocks { get; init; } = true;
 
+    /// <summary>
+    /// Count apart the spare moves that no opponent move can spoil together with another (Bullock
+    /// 2002 calls them vulnerable areas of the first type): one in two of them is sure, not one in three.
+    /// </summary>
+    public bool LoneSpares { get; init; } = true;
+
     /// <summary>Positions equal up to a mirror image (and, on square boards, a transposition with the roles swapped) share one table entry.</summary>
     public bool Symmetry { get; init; } = true;
 
