@@ -130,7 +130,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     public void Restore(int s, int i, (T Own, T Other) saved) => Undo(s, i, saved.Own, saved.Other);
 
     /// <summary>Whether side s (0 = Left, 1 = Right), to move, wins. False also when stopped; check the stop signal.</summary>
-    public bool Wins(int s) => Wins(s, 0);
+    public bool Wins(int s) => Wins(s, 0, boundsTried: false);
 
     /// <summary>The move a table entry holds for side s to move here, in this orientation, or -1.</summary>
     public int TableMove(int s, out bool win)
@@ -247,7 +247,8 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         return best;
     }
 
-    private bool Wins(int s, int ply)
+    /// <param name="boundsTried">The parent already applied the bounds to this position while ordering its moves (they did not decide it).</param>
+    private bool Wins(int s, int ply, bool boundsTried)
     {
         Nodes++;
         if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
@@ -255,7 +256,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         T me = _board[s];
         int w = _shape.Width[s];
         if ((me & (me >> w)) == T.Zero) return false;
-        if (_options.SafeMoveBounds)
+        if (_options.SafeMoveBounds && !boundsTried)
         {
             var (possible, safe, blocks, lone, spare) = Counts(s);
             var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
@@ -295,6 +296,8 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 }
             }
         }
+        // Whether Generate applied the bounds to every child (then a searched child is one they left open).
+        bool judged = _options.SafeMoveBounds && _options.ChildBounds && _options.CountOrdering && _options.EvaluationOrdering;
         int stubborn = -1;
         long stubbornWork = -1;
         T other = _board[1 - s];
@@ -305,7 +308,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             if (verdicts[k] < 0) continue;
             long before = Nodes;
             Play(s, i);
-            bool replyWins = Wins(1 - s, ply + 1);
+            bool replyWins = Wins(1 - s, ply + 1, judged);
             Undo(s, i, me, other);
             if (_stop.IsSet) return false;
             if (!replyWins)
