@@ -44,6 +44,7 @@ public static class BoardAblation
             ("no-blocks", all with { ProtectiveBlocks = false }),
             ("no-lone-spares", all with { LoneSpares = false }),
             ("no-child-bounds", all with { ChildBounds = false }),
+            ("split-below-root", all with { SplitBelowRoot = true }),
             ("skip-safe", all with { SkipSafeMoves = true }),
         };
         var rules = Rulesets.Get("domineering");

@@ -76,6 +76,10 @@ public class WholeBoardTests
     public void TwoThreadsAgreeWithPlainSearch() => AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2 }, 1905, 300);
 
     [Fact]
+    public void TwoThreadsOnTheRepliesAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, SplitBelowRoot = true }, 1911, 300);
+
+    [Fact]
     public void SkippingSafeMovesAgreesWithPlainSearch() =>
         // Never searching a safe move while another move is left (Bullock 2002 states that safe moves can be ignored).
         AgreesWithPlainSearch(new BoardSearchOptions { SkipSafeMoves = true }, 1906, 1500);

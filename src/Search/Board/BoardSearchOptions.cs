@@ -64,6 +64,13 @@ public sealed record BoardSearchOptions
     /// <summary>Buckets of the transposition table as a power of two (32 bytes each).</summary>
     public int TableLog2 { get; init; } = 21;
 
+    /// <summary>
+    /// With more than one thread, share out the opponent's replies to one root move at a time
+    /// (after the first reply alone), rather than the root moves themselves. Off by default: it
+    /// saved nodes on 7×7 but cost them when the side to move loses (bench/README.md).
+    /// </summary>
+    public bool SplitBelowRoot { get; init; }
+
     /// <summary>Threads searching the root moves (sharing the table).</summary>
     public int Threads { get; init; } = 1;
 }
