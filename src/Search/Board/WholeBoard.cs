@@ -211,25 +211,38 @@ public sealed class WholeBoard
         }
 
         if (threads == 1) Worker(0);
-        else
-        {
-            var pool = new Thread[threads];
-            for (int t = 0; t < threads; t++)
-            {
-                int id = t;
-                // A deep recursion on a big board needs more than the default stack.
-                pool[t] = new Thread(() => Worker(id), 64 << 20) { IsBackground = true };
-                pool[t].Start();
-            }
-            foreach (var th in pool) th.Join();
-        }
+        else RunThreads(threads, Worker);
         _liveNodes = null;
         long nodes = searchers.Sum(x => x.Nodes);
         bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
-        if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
+    }
 
+    /// <summary>Runs the worker on that many threads at once and waits for them all.</summary>
+    private static void RunThreads(int threads, Action<int> worker)
+    {
+        var pool = new Thread[threads];
+        for (int t = 0; t < threads; t++)
+        {
+            int id = t;
+            // A deep recursion on a big board needs more than the default stack.
+            pool[t] = new Thread(() => worker(id), 64 << 20) { IsBackground = true };
+            pool[t].Start();
+        }
+        foreach (var th in pool) th.Join();
+    }
+
+    /// <summary>
+    /// The answer of a solve: nothing more when it did not finish; else the winning root move (or,
+    /// lost, the one whose refutation took the most nodes) and the principal line from it.
+    /// </summary>
+    private BoardAnswer Answer<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent,
+        Stopwatch clock, bool? win, int winner, long[] work, long nodes, int searched)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
         int best = winner >= 0 ? winner : Array.IndexOf(work, work.Max());
-        // The line is read with a fresh signal: the one above may have been set by the winning thread.
+        // The line is read with a fresh signal: the one of the search may have been set by the winning thread.
         var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
         reader.SetPosition(empty);
         var line = PrincipalLine(reader, shape, s, rootMoves[best]);
@@ -308,18 +321,7 @@ public sealed class WholeBoard
                 if (!stop.IsSet && !moverWins) refuted = true;
                 else if (!stop.IsSet) answered = 1;
             }
-            if (!refuted && !stop.IsSet && replies.Length > 1)
-            {
-                var pool = new Thread[threads];
-                for (int t = 0; t < threads; t++)
-                {
-                    int id = t;
-                    // A deep recursion on a big board needs more than the default stack.
-                    pool[t] = new Thread(() => Worker(id), 64 << 20) { IsBackground = true };
-                    pool[t].Start();
-                }
-                foreach (var th in pool) th.Join();
-            }
+            if (!refuted && !stop.IsSet && replies.Length > 1) RunThreads(threads, Worker);
             long roundNodes = round.Sum(x => x.Nodes);
             nodes += roundNodes;
             work[k] = roundNodes;
@@ -331,13 +333,7 @@ public sealed class WholeBoard
         }
         _liveNodes = null;
         bool? win = winner >= 0 ? true : !outOfBudget && searched == rootMoves.Length ? false : null;
-        if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
-        int best = winner >= 0 ? winner : Array.IndexOf(work, work.Max());
-        var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
-        reader.SetPosition(empty);
-        var line = PrincipalLine(reader, shape, s, rootMoves[best]);
-        nodes += reader.Nodes;
-        return new BoardAnswer(win, ToMove(shape, s, rootMoves[best]), nodes, clock.ElapsedMilliseconds, line, rootMoves.Length, searched);
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
     }
 
     /// <summary>
