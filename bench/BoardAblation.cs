@@ -19,13 +19,19 @@ public static class BoardAblation
         var boards = new List<string>();
         string? only = null;
         int threads = 1;
+        int capSeconds = 600;
+        int log2 = 22;
+        Side[] sides = [Side.Left, Side.Right];
         for (int i = 0; i < args.Length; i++)
         {
             if (args[i] == "--only") only = args[++i];
             else if (args[i] == "--threads") threads = int.Parse(args[++i]);
+            else if (args[i] == "--first") sides = args[++i] == "left" ? [Side.Left] : [Side.Right];
+            else if (args[i] == "--cap") capSeconds = int.Parse(args[++i]);
+            else if (args[i] == "--table") log2 = int.Parse(args[++i]);
             else boards.Add(args[i]);
         }
-        var all = new BoardSearchOptions { Threads = threads, TableLog2 = 22 };
+        var all = new BoardSearchOptions { Threads = threads, TableLog2 = log2 };
         var configs = new (string Name, BoardSearchOptions Options)[]
         {
             ("all", all),
@@ -35,6 +41,10 @@ public static class BoardAblation
             ("no-eval-order", all with { EvaluationOrdering = false }),
             ("no-child-lookup", all with { ChildLookup = false }),
             ("no-killers-history", all with { KillersAndHistory = false }),
+            ("no-blocks", all with { ProtectiveBlocks = false }),
+            ("no-lone-spares", all with { LoneSpares = false }),
+            ("no-child-bounds", all with { ChildBounds = false }),
+            ("split-below-root", all with { SplitBelowRoot = true }),
             ("skip-safe", all with { SkipSafeMoves = true }),
         };
         var rules = Rulesets.Get("domineering");
@@ -45,15 +55,15 @@ public static class BoardAblation
             foreach (var (name, options) in configs)
             {
                 if (only is not null && name != only) continue;
-                foreach (var side in new[] { Side.Left, Side.Right })
+                foreach (var side in sides)
                 {
                     var position = (DomineeringPosition)rules.Parse(text);
                     var solver = new WholeBoard(options);
                     var clock = Stopwatch.StartNew();
-                    // Ten minutes at most per measurement: the machine is shared.
-                    var answer = solver.Solve(position, side, () => clock.ElapsedMilliseconds > 600_000);
+                    // Ten minutes at most per measurement unless told (--cap): the machine is shared.
+                    var answer = solver.Solve(position, side, () => clock.ElapsedMilliseconds > capSeconds * 1000L);
                     string winner = answer.Win is { } w ? (w == (side == Side.Left) ? "left" : "right") : "unknown";
-                    Console.WriteLine($"| {text} | {side.Word()} | {name} | {winner} | {answer.Nodes:N0} | {clock.ElapsedMilliseconds:N0} |");
+                    Console.WriteLine($"| {text} | {side.Word()} | {name} | {winner} | {answer.Nodes:N0} | {clock.ElapsedMilliseconds:N0} |" + (answer.Win is null ? $" root moves searched {answer.RootMovesSearched}/{answer.RootMoves}" : ""));
                 }
             }
         }

@@ -28,11 +28,11 @@ public class WholeBoardTests
         }
     }
 
-    private static void AgreesWithPlainSearch(BoardSearchOptions options, int seed, int count)
+    private static void AgreesWithPlainSearch(BoardSearchOptions options, int seed, int count, int maxSide = 5)
     {
         var brute = new BruteForce();
         var solver = new WholeBoard(options with { TableLog2 = 12 });
-        foreach (var position in RandomBoards(seed, count))
+        foreach (var position in RandomBoards(seed, count, maxSide))
         {
             foreach (var side in new[] { Side.Left, Side.Right })
             {
@@ -76,9 +76,61 @@ public class WholeBoardTests
     public void TwoThreadsAgreeWithPlainSearch() => AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2 }, 1905, 300);
 
     [Fact]
+    public void TwoThreadsOnTheRepliesAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, SplitBelowRoot = true }, 1911, 300);
+
+    [Fact]
     public void SkippingSafeMovesAgreesWithPlainSearch() =>
         // Never searching a safe move while another move is left (Bullock 2002 states that safe moves can be ignored).
         AgreesWithPlainSearch(new BoardSearchOptions { SkipSafeMoves = true }, 1906, 1500);
+
+    [Fact]
+    public void ProtectiveBlocksInTheBoundsAgreeWithPlainSearch() =>
+        // Protective 2×2 areas counted in the bounds (Bullock 2002); with a fifth of the cells filled they occur often.
+        AgreesWithPlainSearch(new BoardSearchOptions { ProtectiveBlocks = true }, 1908, 800);
+
+    [Fact]
+    public void LoneSparesInTheBoundsAgreeWithPlainSearch() =>
+        // Spares no opponent move can spoil together with another (Bullock 2002), without blocks.
+        AgreesWithPlainSearch(new BoardSearchOptions { ProtectiveBlocks = false, LoneSpares = true }, 1910, 800);
+
+    [Fact]
+    public void BoundsAtTheNodeOnlyAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { ChildBounds = false }, 1909, 600);
+
+    [Fact]
+    public void TheBlockAndSpareRaceHasItsClosedForms()
+    {
+        var sure = SureMoves.Shared;
+        for (int x = 0; x <= SureMoves.MaxSpare; x++)
+        {
+            // Spares alone: the side takes one, the opponent spoils two (the previous bound, derived in docs/domineering.md).
+            Assert.Equal((x + 2) / 3, sure.Get(0, 0, x, movesFirst: true));
+            Assert.Equal((Math.Max(0, x - 2) + 2) / 3, sure.Get(0, 0, x, movesFirst: false));
+        }
+        for (int p = 0; p <= SureMoves.MaxBlocks; p++)
+        {
+            // Blocks alone: each one the side plays into is worth two moves, and the opponent spoils one per turn.
+            Assert.Equal(2 * ((p + 1) / 2), sure.Get(p, 0, 0, movesFirst: true));
+            Assert.Equal(2 * (p / 2), sure.Get(p, 0, 0, movesFirst: false));
+        }
+        for (int v = 0; v <= SureMoves.MaxSpare; v++)
+        {
+            // Lone spares alone: the side takes one, the opponent spoils one.
+            Assert.Equal((v + 1) / 2, sure.Get(0, v, 0, movesFirst: true));
+            Assert.Equal(v / 2, sure.Get(0, v, 0, movesFirst: false));
+        }
+        // More material never lowers the figure.
+        for (int p = 0; p < SureMoves.MaxBlocks; p += 3)
+            for (int v = 0; v < SureMoves.MaxSpare; v += 2)
+                for (int x = 0; x < SureMoves.MaxSpare; x++)
+                    foreach (bool first in new[] { true, false })
+                    {
+                        Assert.True(sure.Get(p + 1, v, x, first) >= sure.Get(p, v, x, first));
+                        Assert.True(sure.Get(p, v + 1, x, first) >= sure.Get(p, v, x, first));
+                        Assert.True(sure.Get(p, v, x + 1, first) >= sure.Get(p, v, x, first));
+                    }
+    }
 
     [Fact]
     public void SkippingSafeMovesWithoutBoundsAgreesWithPlainSearch() =>

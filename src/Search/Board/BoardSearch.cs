@@ -130,7 +130,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     public void Restore(int s, int i, (T Own, T Other) saved) => Undo(s, i, saved.Own, saved.Other);
 
     /// <summary>Whether side s (0 = Left, 1 = Right), to move, wins. False also when stopped; check the stop signal.</summary>
-    public bool Wins(int s) => Wins(s, 0);
+    public bool Wins(int s) => Wins(s, 0, boundsTried: false);
 
     /// <summary>The move a table entry holds for side s to move here, in this orientation, or -1.</summary>
     public int TableMove(int s, out bool win)
@@ -142,22 +142,26 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
 
     /// <summary>
     /// Move counts of side s: Possible, its most disjoint moves now (an upper bound on the moves it
-    /// can still make); Safe, disjoint moves the opponent can never take away; Spare, further
-    /// moves disjoint from those safe ones and from each other (each opponent move can spoil at
-    /// most two of them).
+    /// can still make); Safe, disjoint moves the opponent can never take away; Blocks, protective
+    /// 2×2 areas (two side-by-side pairs that form a run of exactly two across, in both rows: a move in
+    /// one column leaves the other column safe, and the only opponent moves touching it lie inside
+    /// it — Bullock 2002); Spare, further moves disjoint from all those and from each other (each
+    /// opponent move can spoil at most two of them); Lone, the spares that no opponent move can
+    /// spoil together with another (counted apart from Spare).
     /// </summary>
-    public (int Possible, int Safe, int Spare) Counts(int s)
+    public (int Possible, int Safe, int Blocks, int Lone, int Spare) Counts(int s)
     {
         int h = _shape.Height[s], w = _shape.Width[s];
         uint rm = _rowMask[s];
         T b = _board[s];
         Span<uint> rows = stackalloc uint[h];
-        Span<uint> safeUsed = stackalloc uint[h];
+        Span<uint> used = stackalloc uint[h];
         for (int r = 0; r < h; r++) rows[r] = uint.CreateTruncating(b >> (r * w)) & rm;
-        int possible = 0, safe = 0, spare = 0;
-        uint usedP = 0, usedS = 0, usedX = 0;
+        int possible = 0, safe = 0, blocks = 0, spare = 0;
+        uint usedP = 0, usedS = 0, usedB = 0, usedX = 0;
         uint prevSafe = rows[0] & ~(rows[0] >> 1) & ~(rows[0] << 1);
-        safeUsed[0] = 0;
+        uint prevRun2 = Run2(rows[0]);
+        used[0] = 0;
         for (int r = 1; r < h; r++)
         {
             uint prev = rows[r - 1], cur = rows[r];
@@ -170,27 +174,62 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             uint u = prevSafe & ~usedS & curSafe;
             safe += BitOperations.PopCount(u);
             usedS = u;
-            safeUsed[r - 1] |= u;
-            safeUsed[r] = u;
+            used[r - 1] |= u;
+            used[r] = u;
             prevSafe = curSafe;
+            if (_options.ProtectiveBlocks)
+            {
+                // Runs of exactly two across in both rows, at the same columns: a protective block
+                // (its cells are never protected, so never part of a safe move).
+                uint curRun2 = Run2(cur);
+                uint x = prevRun2 & curRun2 & ~usedB;
+                blocks += BitOperations.PopCount(x);
+                usedB = x;
+                uint cells = x | (x << 1);
+                used[r - 1] |= cells;
+                used[r] |= cells;
+                prevRun2 = curRun2;
+            }
         }
+        Span<uint> spareCells = stackalloc uint[h];
+        Span<uint> spareTops = stackalloc uint[h];
+        spareCells[0] = 0;
         for (int r = 1; r < h; r++)
         {
-            uint x = rows[r - 1] & ~safeUsed[r - 1] & ~usedX & rows[r] & ~safeUsed[r];
+            uint x = rows[r - 1] & ~used[r - 1] & ~usedX & rows[r] & ~used[r];
             spare += BitOperations.PopCount(x);
             usedX = x;
+            spareCells[r - 1] |= x;
+            spareCells[r] = x;
+            spareTops[r - 1] = x;
         }
-        return (possible, safe, spare);
+        int lone = 0;
+        if (_options.LoneSpares && spare > 0)
+        {
+            // A spare none of whose cells has another spare's cell beside it across: an opponent
+            // move that spoils it spoils nothing else (safe cells and blocks never stand beside a spare).
+            for (int r = 0; r + 1 < h; r++)
+            {
+                uint top = spareTops[r];
+                if (top == 0) continue;
+                uint beside = (spareCells[r] << 1) | (spareCells[r] >> 1) | (spareCells[r + 1] << 1) | (spareCells[r + 1] >> 1);
+                lone += BitOperations.PopCount(top & ~beside);
+            }
+        }
+        return (possible, safe, blocks, lone, spare - lone);
     }
 
-    /// <summary>
-    /// Moves side s is sure to make however the opponent plays: its safe moves, and of its spare
-    /// moves one in three when it moves first (it plays one, the opponent spoils at most two, and
-    /// so on) or, moving second, one in three of those the opponent's first move leaves.
-    /// </summary>
-    private static int Guaranteed(int safe, int spare, bool movesFirst) =>
-        safe + (movesFirst ? (spare + 2) / 3 : (Math.Max(0, spare - 2) + 2) / 3);
+    /// <summary>The first cells of the runs of exactly two empty cells across a row.</summary>
+    private static uint Run2(uint x) => x & (x >> 1) & ~(x << 1) & ~(x >> 2);
 
+    /// <summary>
+    /// Moves side s is sure to make however the opponent plays: its safe moves, plus what it wins
+    /// in the race for its blocks and spare moves (<see cref="SureMoves"/>).
+    /// </summary>
+    private int Guaranteed(int safe, int blocks, int lone, int spare, bool movesFirst) =>
+        safe + _sure.Get(blocks, lone, spare, movesFirst);
+
+    private readonly SureMoves _sure = SureMoves.Shared;
     private ulong Key(int s, out int mirror)
     {
         ulong best = _hash[s * 4];
@@ -208,7 +247,8 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         return best;
     }
 
-    private bool Wins(int s, int ply)
+    /// <param name="boundsTried">The parent already applied the bounds to this position while ordering its moves (they did not decide it).</param>
+    private bool Wins(int s, int ply, bool boundsTried)
     {
         Nodes++;
         if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
@@ -216,21 +256,29 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         T me = _board[s];
         int w = _shape.Width[s];
         if ((me & (me >> w)) == T.Zero) return false;
-        if (_options.SafeMoveBounds)
+        if (_options.SafeMoveBounds && !boundsTried)
         {
-            var (possible, safe, spare) = Counts(s);
-            var (oppPossible, oppSafe, oppSpare) = Counts(1 - s);
+            var (possible, safe, blocks, lone, spare) = Counts(s);
+            var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
             // The mover's sure moves outlast every move the opponent can still make.
-            if (Guaranteed(safe, spare, movesFirst: true) > oppPossible) return true;
+            if (Guaranteed(safe, blocks, lone, spare, movesFirst: true) > oppPossible) return true;
             // The opponent answers each of the mover's possible moves with one of its sure moves.
-            if (Guaranteed(oppSafe, oppSpare, movesFirst: false) >= possible) return false;
+            if (Guaranteed(oppSafe, oppBlocks, oppLone, oppSpare, movesFirst: false) >= possible) return false;
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;
 
         long start = Nodes;
         Span<int> moves = stackalloc int[_shape.Cells];
-        int n = Generate(s, ply, moves);
+        Span<sbyte> verdicts = stackalloc sbyte[_shape.Cells];
+        int n = Generate(s, ply, moves, verdicts);
+        for (int k = 0; k < n; k++)
+        {
+            if (verdicts[k] <= 0) continue;
+            // A move after which the opponent loses by the bounds.
+            _table.Store(key, true, _shape.MirrorMove[s][mirror][moves[k]], 1);
+            return true;
+        }
         if (_options.ChildLookup)
         {
             var d = _shape.HashDelta[s];
@@ -248,15 +296,19 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 }
             }
         }
+        // Whether Generate applied the bounds to every child (then a searched child is one they left open).
+        bool judged = _options.SafeMoveBounds && _options.ChildBounds && _options.CountOrdering && _options.EvaluationOrdering;
         int stubborn = -1;
         long stubbornWork = -1;
         T other = _board[1 - s];
         for (int k = 0; k < n; k++)
         {
             int i = moves[k];
+            // The opponent wins there by the bounds: this move loses, nothing to search.
+            if (verdicts[k] < 0) continue;
             long before = Nodes;
             Play(s, i);
-            bool replyWins = Wins(1 - s, ply + 1);
+            bool replyWins = Wins(1 - s, ply + 1, judged);
             Undo(s, i, me, other);
             if (_stop.IsSet) return false;
             if (!replyWins)
@@ -292,10 +344,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         T me = _board[s];
         int w = _shape.Width[s];
         if ((me & (me >> w)) == T.Zero) return -ProvenWin + ply;
-        var (possible, safe, spare) = Counts(s);
-        var (oppPossible, oppSafe, oppSpare) = Counts(1 - s);
-        if (Guaranteed(safe, spare, movesFirst: true) > oppPossible) return ProvenWin - ply;
-        if (Guaranteed(oppSafe, oppSpare, movesFirst: false) >= possible) return -ProvenWin + ply;
+        var (possible, safe, blocks, lone, spare) = Counts(s);
+        var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
+        if (Guaranteed(safe, blocks, lone, spare, movesFirst: true) > oppPossible) return ProvenWin - ply;
+        if (Guaranteed(oppSafe, oppBlocks, oppLone, oppSpare, movesFirst: false) >= possible) return -ProvenWin + ply;
         if (_table.TryGet(Key(s, out _), out bool known, out _)) return known ? ProvenWin - ply : -ProvenWin + ply;
         if (depth <= 0) return possible + 3 * safe - oppPossible - 3 * oppSafe;
         Span<int> moves = stackalloc int[_shape.Cells];
@@ -336,8 +388,16 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     }
 
     /// <summary>Writes the moves of side s into the span in search order; returns how many.</summary>
-    private int Generate(int s, int ply, Span<int> moves)
+    private int Generate(int s, int ply, Span<int> moves) => Generate(s, ply, moves, []);
+
+    /// <summary>
+    /// As <see cref="Generate(int, int, Span{int})"/>; when <paramref name="verdicts"/> has room and
+    /// the evaluation ordering has computed the counts after a move anyway, also the safe-move
+    /// bounds of the child: +1 when the opponent, to move there, loses by them, −1 when it wins.
+    /// </summary>
+    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts)
     {
+        bool judge = verdicts.Length >= moves.Length && _options.SafeMoveBounds && _options.ChildBounds;
         T b = _board[s];
         int w = _shape.Width[s];
         T tops = b & (b >> w);
@@ -357,6 +417,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             int j = i + w;
             bool safe = Bit(prot, i) && Bit(prot, j);
             int score = 0;
+            sbyte verdict = 0;
             if (_options.CountOrdering)
             {
                 int oppTaken = Bit(oppPairs, i).AsInt() + Bit(oppPairs, i - 1).AsInt() + Bit(oppPairs, j).AsInt() + Bit(oppPairs, j - 1).AsInt();
@@ -368,11 +429,17 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                     T ownBefore = _board[s], otherBefore = _board[1 - s];
                     _board[s] &= _clearOwn[s][i];
                     _board[1 - s] &= _clearOther[s][i];
-                    var (p1, s1, _) = Counts(s);
-                    var (p2, s2, _) = Counts(1 - s);
+                    var (p1, s1, b1, v1, x1) = Counts(s);
+                    var (p2, s2, b2, v2, x2) = Counts(1 - s);
                     _board[s] = ownBefore;
                     _board[1 - s] = otherBefore;
                     gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gain;
+                    if (judge)
+                    {
+                        // The very tests the child would make first (Wins), settled here without visiting it.
+                        verdict = p2 == 0 || Guaranteed(s1, b1, v1, x1, movesFirst: false) >= p2 ? (sbyte)1
+                            : Guaranteed(s2, b2, v2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
+                    }
                 }
                 score = (Math.Clamp(gain, -250, 250) + 256) << 21;
                 if (safe) score = 0;
@@ -385,21 +452,25 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             }
             if (safe) safeCount++;
             moves[n] = i;
-            keys[n] = safe && skipSafe ? int.MinValue : score;
+            keys[n] = safe && skipSafe ? int.MinValue : verdict > 0 ? int.MaxValue : score;
+            if (judge) verdicts[n] = verdict;
             n++;
         }
         // Insertion sort, best first: lists are short and mostly ordered already.
         for (int a = 1; a < n; a++)
         {
             int m = moves[a], key = keys[a], c = a - 1;
+            sbyte v = judge ? verdicts[a] : (sbyte)0;
             while (c >= 0 && keys[c] < key)
             {
                 moves[c + 1] = moves[c];
                 keys[c + 1] = keys[c];
+                if (judge) verdicts[c + 1] = verdicts[c];
                 c--;
             }
             moves[c + 1] = m;
             keys[c + 1] = key;
+            if (judge) verdicts[c + 1] = v;
         }
         // The experiment of skipping safe moves: drop them (sorted last) unless nothing else is left.
         if (skipSafe && safeCount < n) n -= safeCount;

@@ -14,6 +14,18 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool SafeMoveBounds { get; init; } = true;
 
+    /// <summary>
+    /// Count protective 2×2 areas in the safe-move bounds (Bullock 2002): a side that plays into one
+    /// gets a safe move beside it, and the opponent can spoil it only with a move inside it.
+    /// </summary>
+    public bool ProtectiveBlocks { get; init; } = true;
+
+    /// <summary>
+    /// Count apart the spare moves that no opponent move can spoil together with another (Bullock
+    /// 2002 calls them vulnerable areas of the first type): one in two of them is sure, not one in three.
+    /// </summary>
+    public bool LoneSpares { get; init; } = true;
+
     /// <summary>Positions equal up to a mirror image (and, on square boards, a transposition with the roles swapped) share one table entry.</summary>
     public bool Symmetry { get; init; } = true;
 
@@ -32,6 +44,13 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool ChildLookup { get; init; } = true;
 
+    /// <summary>
+    /// Apply the safe-move bounds to each child while ordering (the evaluation ordering counts the
+    /// position after every move anyway): a move the bounds call won is played at once, a move
+    /// they call lost is never searched. Same answers; the children are not visited as nodes.
+    /// </summary>
+    public bool ChildBounds { get; init; } = true;
+
     /// <summary>Two killer moves per ply and a history count per move (common practice).</summary>
     public bool KillersAndHistory { get; init; } = true;
 
@@ -44,6 +63,13 @@ public sealed record BoardSearchOptions
 
     /// <summary>Buckets of the transposition table as a power of two (32 bytes each).</summary>
     public int TableLog2 { get; init; } = 21;
+
+    /// <summary>
+    /// With more than one thread, share out the opponent's replies to one root move at a time
+    /// (after the first reply alone), rather than the root moves themselves. Off by default: it
+    /// saved nodes on 7×7 but cost them when the side to move loses (bench/README.md).
+    /// </summary>
+    public bool SplitBelowRoot { get; init; }
 
     /// <summary>Threads searching the root moves (sharing the table).</summary>
     public int Threads { get; init; } = 1;

@@ -167,6 +167,9 @@ public sealed class WholeBoard
         var rootMoves = main.OrderedMoves(s);
         if (rootMoves.Length == 0) return new BoardAnswer(false, null, 1, clock.ElapsedMilliseconds, [], 0, 0);
 
+        if (Options.Threads > 1 && Options.SplitBelowRoot)
+            return RunSplit<T>(shape, table, empty, s, rootMoves, spent, clock);
+
         int threads = Math.Clamp(Options.Threads, 1, rootMoves.Length);
         var searchers = new BoardSearch<T>[threads];
         searchers[0] = main;
@@ -208,30 +211,129 @@ public sealed class WholeBoard
         }
 
         if (threads == 1) Worker(0);
-        else
-        {
-            var pool = new Thread[threads];
-            for (int t = 0; t < threads; t++)
-            {
-                int id = t;
-                // A deep recursion on a big board needs more than the default stack.
-                pool[t] = new Thread(() => Worker(id), 64 << 20) { IsBackground = true };
-                pool[t].Start();
-            }
-            foreach (var th in pool) th.Join();
-        }
+        else RunThreads(threads, Worker);
         _liveNodes = null;
         long nodes = searchers.Sum(x => x.Nodes);
         bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
-        if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
+    }
 
+    /// <summary>Runs the worker on that many threads at once and waits for them all.</summary>
+    private static void RunThreads(int threads, Action<int> worker)
+    {
+        var pool = new Thread[threads];
+        for (int t = 0; t < threads; t++)
+        {
+            int id = t;
+            // A deep recursion on a big board needs more than the default stack.
+            pool[t] = new Thread(() => worker(id), 64 << 20) { IsBackground = true };
+            pool[t].Start();
+        }
+        foreach (var th in pool) th.Join();
+    }
+
+    /// <summary>
+    /// The answer of a solve: nothing more when it did not finish; else the winning root move (or,
+    /// lost, the one whose refutation took the most nodes) and the principal line from it.
+    /// </summary>
+    private BoardAnswer Answer<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent,
+        Stopwatch clock, bool? win, int winner, long[] work, long nodes, int searched)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        if (win is null) return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, searched);
         int best = winner >= 0 ? winner : Array.IndexOf(work, work.Max());
-        // The line is read with a fresh signal: the one above may have been set by the winning thread.
+        // The line is read with a fresh signal: the one of the search may have been set by the winning thread.
         var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
         reader.SetPosition(empty);
         var line = PrincipalLine(reader, shape, s, rootMoves[best]);
         nodes += reader.Nodes;
         return new BoardAnswer(win, ToMove(shape, s, rootMoves[best]), nodes, clock.ElapsedMilliseconds, line, rootMoves.Length, searched);
+    }
+
+    /// <summary>
+    /// Both cores on one root move at a time: the root moves are tried in order, and the threads
+    /// share out the opponent's replies to the move being tried (each proves that the mover
+    /// still wins after its reply). A reply after which the mover loses refutes the move and stops
+    /// the other thread; a move all of whose replies are answered wins. A first move that wins —
+    /// the usual case on boards the side to move wins — so gets both threads on its proof, where
+    /// splitting the root moves themselves would leave the second thread on a move not needed.
+    /// </summary>
+    private BoardAnswer RunSplit<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent, Stopwatch clock)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        int threads = Options.Threads;
+        long nodes = 0;
+        int winner = -1, searched = 0;
+        var work = new long[rootMoves.Length];
+        BoardSearch<T>[] searchers = [];
+        _liveNodes = () => nodes + searchers.Sum(x => x?.Nodes ?? 0);
+        _liveClock = clock;
+        _liveMoves = rootMoves;
+        _liveSide = s;
+        bool outOfBudget = false;
+        for (int k = 0; k < rootMoves.Length && winner < 0; k++)
+        {
+            Volatile.Write(ref _liveRoot, k);
+            var stop = new StopSignal();
+            var round = new BoardSearch<T>[threads];
+            for (int t = 0; t < threads; t++)
+            {
+                round[t] = new BoardSearch<T>(shape, table, stop, Options, spent);
+                round[t].SetPosition(empty);
+                round[t].Play(s, rootMoves[k]);
+            }
+            searchers = round;
+            var replies = round[0].OrderedMoves(1 - s);
+            int next = -1, answered = 0;
+            bool refuted = false;
+
+            void Worker(int t)
+            {
+                var search = round[t];
+                while (!stop.IsSet)
+                {
+                    int j = Interlocked.Increment(ref next);
+                    if (j >= replies.Length) return;
+                    var saved = search.Save(1 - s);
+                    search.Play(1 - s, replies[j]);
+                    bool moverWins = search.Wins(s);
+                    search.Restore(1 - s, replies[j], saved);
+                    if (stop.IsSet) return;
+                    if (!moverWins)
+                    {
+                        refuted = true;
+                        stop.Set();
+                        return;
+                    }
+                    Interlocked.Increment(ref answered);
+                }
+            }
+
+            // The first reply alone, as the move order makes it the likeliest refutation: only a
+            // move that survives it gets both threads (young brothers wait, common practice).
+            if (replies.Length > 0)
+            {
+                next = 0;
+                var saved = round[0].Save(1 - s);
+                round[0].Play(1 - s, replies[0]);
+                bool moverWins = round[0].Wins(s);
+                round[0].Restore(1 - s, replies[0], saved);
+                if (!stop.IsSet && !moverWins) refuted = true;
+                else if (!stop.IsSet) answered = 1;
+            }
+            if (!refuted && !stop.IsSet && replies.Length > 1) RunThreads(threads, Worker);
+            long roundNodes = round.Sum(x => x.Nodes);
+            nodes += roundNodes;
+            work[k] = roundNodes;
+            searchers = [];
+            if (refuted) { searched++; continue; }
+            if (answered == replies.Length) { searched++; winner = k; break; }
+            outOfBudget = true;
+            break;
+        }
+        _liveNodes = null;
+        bool? win = winner >= 0 ? true : !outOfBudget && searched == rootMoves.Length ? false : null;
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
     }
 
     /// <summary>
