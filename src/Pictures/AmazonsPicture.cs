@@ -33,7 +33,9 @@ public static class AmazonsPicture
         "text{font-family:sans-serif;font-size:13px;fill:#333}.light{fill:#efe3c8;stroke:#8a7550;stroke-width:1}" +
         ".dark{fill:#d8c49c;stroke:#8a7550;stroke-width:1}.burnt{fill:#4a3b2a;stroke:#2b2118}.cross{stroke:#a08a6a;stroke-width:2}" +
         ".left{fill:#2b2b2b;stroke:#000}.right{fill:#fafafa;stroke:#444;stroke-width:1.5}.crown{fill:#c9a227}" +
-        ".last{stroke:#3a7bd5;stroke-width:4;stroke-opacity:0.6;stroke-linecap:round}.shot{fill:none;stroke:#d5533a;stroke-width:3}";
+        ".last{stroke:#3a7bd5;stroke-width:4;stroke-opacity:0.6;stroke-linecap:round}.shot{fill:none;stroke:#d5533a;stroke-width:3}" +
+        // Clicks go through the pieces and marks to the square beneath, which names the square.
+        ".left,.right,.crown,.cross,.last,.shot{pointer-events:none}";
 
     public static string Svg(AmazonsPosition position)
     {
@@ -56,7 +58,20 @@ public static class AmazonsPicture
                 svg.Add("line", "cross", ("x1", X(i) + 10), ("y1", Y(i) + 10), ("x2", X(i) + cell - 10), ("y2", Y(i) + cell - 10), ("data-cell", name));
                 svg.Add("line", "cross", ("x1", X(i) + cell - 10), ("y1", Y(i) + 10), ("x2", X(i) + 10), ("y2", Y(i) + cell - 10), ("data-cell", name));
             }
-            else if (square != Square.Empty)
+        }
+        if (position.LastMove is { } last)
+        {
+            int from = last.A, to = last.B / 128, arrow = last.B % 128;
+            svg.Add("line", "last", ("x1", X(from) + cell / 2), ("y1", Y(from) + cell / 2), ("x2", X(to) + cell / 2), ("y2", Y(to) + cell / 2),
+                ("data-last", position.FormatMove(last)));
+            svg.Add("circle", "shot", ("cx", X(arrow) + cell / 2), ("cy", Y(arrow) + cell / 2), ("r", cell * 0.42));
+        }
+        // Amazons last, over the last move's line, so the line runs under the piece that made it.
+        for (int i = 0; i < board.Count; i++)
+        {
+            string name = board.CellName(i);
+            var square = board[i];
+            if (square is Square.LeftAmazon or Square.RightAmazon)
             {
                 svg.Add("circle", square == Square.LeftAmazon ? "left" : "right",
                     ("cx", X(i) + cell / 2), ("cy", Y(i) + cell / 2), ("r", cell * 0.36), ("data-cell", name));
@@ -68,13 +83,6 @@ public static class AmazonsPicture
                 }.Select(p => $"{Bramble.Pictures.Svg.Num(p.Item1)},{Bramble.Pictures.Svg.Num(p.Item2)}"));
                 svg.Add("polygon", "crown", ("points", points), ("data-cell", name));
             }
-        }
-        if (position.LastMove is { } last)
-        {
-            int from = last.A, to = last.B / 128, arrow = last.B % 128;
-            svg.Add("line", "last", ("x1", X(from) + cell / 2), ("y1", Y(from) + cell / 2), ("x2", X(to) + cell / 2), ("y2", Y(to) + cell / 2),
-                ("data-last", position.FormatMove(last)));
-            svg.Add("circle", "shot", ("cx", X(arrow) + cell / 2), ("cy", Y(arrow) + cell / 2), ("r", cell * 0.42));
         }
         return svg.Render(Style, "Amazons " + position.Text);
     }

@@ -16,7 +16,7 @@ namespace Bramble.Rules.Amazons;
 /// </summary>
 public static class AmazonsGenerators
 {
-    public static readonly IReadOnlyList<string> Names = ["starts", "endgames", "regions", "midgames"];
+    public static readonly IReadOnlyList<string> Names = ["regions", "endgames", "starts", "midgames"];
 
     public static IReadOnlyList<string> Generate(AmazonsRuleset ruleset, string generator, int count, int size, int seed)
     {
