@@ -23,7 +23,7 @@ public static class DbVerb
 
     private static Command BuildCommand()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "domineering (regions up to N cells) or hackenbush (pieces up to N edges)" };
+        var ruleset = new Argument<string>("ruleset") { Description = "One of " + ComponentCatalogues.Describe() };
         var size = new Option<int?>("--size") { Description = "Largest component size to precompute: cells for domineering, edges for hackenbush" };
         // The first spelling, kept working for scripts but not shown: it read wrong for edges.
         var cells = new Option<int?>("--cells") { Description = "Old spelling of --size", Hidden = true };
