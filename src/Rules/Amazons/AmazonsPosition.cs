@@ -226,7 +226,18 @@ public sealed class AmazonsPosition : IPosition, IEstimable
     /// </summary>
     public string NormalKey => _key ??= ComponentValues.JoinKeys(Regions.Select(KeyOf));
 
-    private string KeyOf(int[] region)
+    /// <summary>The area of the bounding box of the first live region (0 when there is none).</summary>
+    internal int BoxArea
+    {
+        get
+        {
+            if (Regions.Length == 0) return 0;
+            var (top, left, bottom, right) = Box(Regions[0]);
+            return (bottom - top + 1) * (right - left + 1);
+        }
+    }
+
+    private (int Top, int Left, int Bottom, int Right) Box(int[] region)
     {
         int top = int.MaxValue, left = int.MaxValue, bottom = -1, right = -1;
         foreach (int cell in region)
@@ -235,6 +246,12 @@ public sealed class AmazonsPosition : IPosition, IEstimable
             top = Math.Min(top, r); bottom = Math.Max(bottom, r);
             left = Math.Min(left, c); right = Math.Max(right, c);
         }
+        return (top, left, bottom, right);
+    }
+
+    private string KeyOf(int[] region)
+    {
+        var (top, left, bottom, right) = Box(region);
         int height = bottom - top + 1, width = right - left + 1;
         var box = new char[height, width];
         for (int r = 0; r < height; r++)

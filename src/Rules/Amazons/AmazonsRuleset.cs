@@ -35,6 +35,9 @@ public sealed class AmazonsRuleset : IRuleset, IComponentCatalogue
 
     public string SizeUnit => "squares";
 
+    /// <summary>The squares of the region's bounding box: the list holds rectangles, and a region's key is its box.</summary>
+    public int CatalogueSize(IPosition component) => ((AmazonsPosition)component).BoxArea;
+
     /// <summary>
     /// Every filling (empty, Left's amazon, Right's amazon or burnt on each square) of every
     /// rectangle of up to <paramref name="size"/> squares that is one live region, up to symmetry
