@@ -12,6 +12,7 @@ public static class Rulesets
         new ToadsAndFrogs.ToadsAndFrogsRuleset(),
         new Clobber.ClobberRuleset(),
         new Konane.KonaneRuleset(),
+        new Amazons.AmazonsRuleset(),
     ];
 
     public static IReadOnlyList<IRuleset> All => s_all;

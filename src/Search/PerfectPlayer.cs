@@ -27,6 +27,7 @@ public sealed class PerfectPlayer : IPlayer
     private readonly LargeSearch _large;
     private readonly TemperatureStrategy _fallback;
     private readonly WholeBoard _board;
+    private readonly HeuristicSearch _heuristic = new();
 
     public PerfectPlayer(PerfectSettings? settings = null, ValueContext? context = null)
     {
@@ -62,6 +63,15 @@ public sealed class PerfectPlayer : IPlayer
         _large.Budget = b;
         if (position.Moves(side).Count == 0)
             return new Decision(null, 0, b.ElapsedMs, Exact: true, Value: TryValueText(position, b), Winning: false);
+
+        // A big component of a ruleset with a static estimate (an Amazons opening or midgame): the
+        // heuristic whole-board search. Exact values take over once every region is small.
+        if (position is IEstimable && position.Components().Any(c => c.Size > Settings.HeuristicSize))
+        {
+            var choice = _heuristic.Choose(position, side, b);
+            return new Decision(choice.Move, choice.Nodes, clock.ElapsedMilliseconds, Exact: false,
+                Line: [position.FormatMove(choice.Move)]);
+        }
 
         // The whole-board search counts its own nodes, so a decision with a node cap keeps to the decomposition search.
         if (Settings.WholeBoard && Settings.NodeCap == long.MaxValue && position is DomineeringPosition board && WholeBoard.Fits(board.Board)

@@ -35,6 +35,13 @@ public sealed record PerfectSettings
     public long FallbackMaxMs { get; init; } = 2_000;
 
     /// <summary>
+    /// A position whose ruleset offers a static estimate (<see cref="Bramble.Rules.IEstimable"/>, e.g.
+    /// Amazons) and which has a component over this size is played by <see cref="HeuristicSearch"/>
+    /// over the whole board instead: no exact value or proof search can finish there.
+    /// </summary>
+    public int HeuristicSize { get; init; } = 32;
+
+    /// <summary>
     /// Domineering boards of at most 128 cells with a component over <see cref="ExactSize"/> go to
     /// the bitboard search of the whole board (<see cref="Board.WholeBoard"/>) instead of the
     /// decomposition search (unless <see cref="NodeCap"/> is set: node caps belong to the decomposition search).

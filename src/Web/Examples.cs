@@ -16,6 +16,8 @@ public static class Examples
             "click an edge to cut it (Left cuts blue or green, Right red or green)", "blue", "red"),
         ["domineering"] = new("domineering", "4x4",
             "click two neighbouring cells to place a domino (Left vertical, Right horizontal)", "vertical", "horizontal", "domino"),
+        ["amazons"] = new("amazons", ".L../#..R/R..L/.#..",
+            "click an amazon, the square it goes to, then where its arrow lands (Left plays L, Right R)", "L amazons", "R amazons", "three"),
         ["forms"] = new("forms", "{3|-1} + {5|2||0} + * + 1/2",
             "click an option's line in a term (Left's hang to the left, Right's to the right)", "Left", "Right"),
     };

@@ -8,9 +8,9 @@ public class DbBuildTests
     public void HelpNamesEveryRulesetWithAListAndEachBuildsAndReadsBack()
     {
         var (_, help, _) = ConsoleRunner.Run("db", "build", "--help");
-        foreach (var name in new[] { "domineering", "hackenbush", "cutcake", "toads-and-frogs", "clobber", "konane" })
+        foreach (var name in new[] { "domineering", "hackenbush", "cutcake", "toads-and-frogs", "clobber", "konane", "amazons" })
             Assert.Contains(name, help);
-        foreach (var (ruleset, size) in new[] { ("cutcake", "12"), ("toads-and-frogs", "5"), ("clobber", "4"), ("konane", "6"), ("hackenbush", "3") })
+        foreach (var (ruleset, size) in new[] { ("cutcake", "12"), ("toads-and-frogs", "5"), ("clobber", "4"), ("konane", "6"), ("hackenbush", "3"), ("amazons", "4") })
         {
             var path = Path.Combine(Path.GetTempPath(), $"bramble-{Guid.NewGuid():N}.db");
             try

@@ -87,6 +87,27 @@ public sealed class PlayInBrowserTests(BrowserFixture browser)
     }
 
     [Fact]
+    public async Task AmazonsGamePlayedByClickingThreeSquares()
+    {
+        var page = await browser.OpenAsync();
+        await NewGameAsync(page, "amazons", "L.../.#../...R", "random", "left", "you");
+        for (int turn = 0; turn < 12 && await page.GetAttributeAsync("#play-board", "data-over") != "true"; turn++)
+        {
+            // A move is three squares: the amazon, where it goes, where its arrow lands (from-to/arrow).
+            var move = (await page.GetAttributeAsync("#play-legal [data-legal]", "data-legal"))!;
+            var squares = move.Split('-', '/');
+            int plies = await PliesAsync(page);
+            foreach (var square in squares) await page.ClickAsync($"#play-board [data-cell='{square}'] >> nth=0");
+            await page.WaitForFunctionAsync("n => { const b = document.querySelector('#play-board'); return b.dataset.busy === 'false' && Number(b.dataset.plies) > n; }", plies);
+            if (turn == 0) await browser.ShotAsync(page, "play-amazons");
+        }
+        Assert.Equal("true", await page.GetAttributeAsync("#play-board", "data-over"));
+        var last = (await page.Locator("#play-moves li").Last.TextContentAsync())!.Trim();
+        var winner = last.StartsWith("Left") ? "Left" : "Right";
+        Assert.Contains($"so {winner} wins", (await page.TextContentAsync("#play-result"))!);
+    }
+
+    [Fact]
     public async Task HintMovesWinByExactAnalysis()
     {
         const string start = "BRB + G(B,R) + GGG + [B0-1,R1-2,G2-0,B1-3]";

@@ -273,6 +273,8 @@ public sealed class TerminalGame(IPosition start, Side human, Side firstMover, I
         ("toads-and-frogs", Side.Right) => " (the frogs, F)",
         ("cutcake", Side.Left) => " (cuts between columns)",
         ("cutcake", Side.Right) => " (cuts between rows)",
+        ("amazons", Side.Left) => " (the L amazons)",
+        ("amazons", Side.Right) => " (the R amazons)",
         _ => "",
     };
 }

@@ -1,6 +1,7 @@
 // Drawing a position (the SVG comes from the server's picture code) and turning clicks on it into
 // move names. Shared by every ruleset: an element with data-move names its move; Domineering's
-// cells (data-cell) are picked two at a time and become the domino's top or left cell.
+// cells (data-cell) are picked two at a time and become the domino's top or left cell; Amazons'
+// three at a time (the amazon, where it goes, where its arrow lands).
 
 export function show(container, board) {
   if (board.svg) {
@@ -28,14 +29,32 @@ const cellName = (col, row) => String.fromCharCode(97 + col) + row;
 
 /**
  * Listens for moves made by pointing. pick() says how the current ruleset picks moves: 'point'
- * (the clicked element names its move) or 'domino' (two neighbouring cells). onMove(text) is
+ * (the clicked element names its move), 'domino' (two neighbouring cells) or 'three' (three
+ * squares: from, to, arrow). onMove(text) is
  * called with a move name; onProblem(text) with a reason when two cells make no domino for the
  * side to move.
  */
 export function listen(container, { side, pick, onMove, onProblem, onPick }) {
   let picked = null;
   const clear = () => { picked?.classList.remove('picked'); picked = null; };
+  // Amazons: three squares in turn (the amazon, its landing square, the arrow's square).
+  let chain = [];
+  const clearChain = () => { chain.forEach(c => c.classList.remove('picked')); chain = []; };
   container.onclick = event => {
+    if (pick() === 'three') {
+      const cell = event.target.closest('[data-cell]');
+      if (!cell) return;
+      if (chain.length > 0 && chain[chain.length - 1] === cell && chain.length === 1) { clearChain(); return; }
+      chain.push(cell);
+      cell.classList.add('picked');
+      onPick?.(cell.dataset.cell);
+      if (chain.length === 3) {
+        const [from, to, arrow] = chain.map(c => c.dataset.cell);
+        clearChain();
+        onMove(`${from}-${to}/${arrow}`);
+      }
+      return;
+    }
     if (pick() !== 'domino') {
       const move = moveOf(event.target);
       if (move) onMove(move, event.target);

@@ -21,6 +21,7 @@ public sealed class CatalogueTests : IDisposable
         { "toads-and-frogs", 7 },
         { "clobber", 5 },
         { "konane", 6 },
+        { "amazons", 6 },
     };
 
     [Theory]
@@ -87,6 +88,12 @@ public sealed class CatalogueTests : IDisposable
                 var cells = Enumerable.Repeat('.', h * w).ToArray();
                 for (int k = random.Next(2, size + 1); k > 0; k--) cells[random.Next(h * w)] = "xo"[random.Next(2)];
                 return string.Join("/", Enumerable.Range(0, h).Select(r => new string(cells, r * w, w)));
+            }
+            case "amazons":
+            {
+                // A board of at most `size` squares: every region's bounding box is a part of it.
+                int h = random.Next(1, 3), w = random.Next(2, size / h + 1);
+                return string.Join("/", Enumerable.Range(0, h).Select(_ => new string(Enumerable.Range(0, w).Select(_ => "LR.#"[random.Next(4)]).ToArray())));
             }
             default:
             {
