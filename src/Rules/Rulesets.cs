@@ -12,6 +12,8 @@ public static class Rulesets
         new ToadsAndFrogs.ToadsAndFrogsRuleset(),
         new Clobber.ClobberRuleset(),
         new Konane.KonaneRuleset(),
+        new Snort.SnortRuleset(),
+        new Col.ColRuleset(),
     ];
 
     public static IReadOnlyList<IRuleset> All => s_all;

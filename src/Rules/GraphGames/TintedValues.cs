@@ -1,0 +1,41 @@
+using Bramble.Values;
+
+namespace Bramble.Rules.GraphGames;
+
+/// <summary>
+/// Exact canonical values of Snort and Col parts by memoised search over their tinted forms.
+/// The memo is the context's, under "ruleset:key" with the representative's value (see
+/// <see cref="TintedPart.SignedKey"/>): a part and its colour-swapped image, and every
+/// relabelling of either, are searched once between them, and a database file holds the same
+/// entries. After a move only the parts the move touched are new; the rest are memo hits.
+/// </summary>
+public sealed class TintedValues(IRuleset ruleset, ColouringRule rule, ValueContext context)
+{
+    private readonly GameStore _store = context.Store;
+
+    public Game ValueOf(IEnumerable<TintedPart> parts)
+    {
+        var total = _store.Zero;
+        foreach (var part in parts) total = _store.Add(total, ValueOf(part));
+        return total;
+    }
+
+    public Game ValueOf(TintedPart part)
+    {
+        string key = part.SignedKey;
+        bool negated = key.Length > 0 && key[0] == '-';
+        string representative = negated ? key[1..] : key;
+        if (context.TryGetMemo(ruleset, representative, out var known)) return negated ? _store.Negate(known) : known;
+        context.Tick();
+        var left = new List<Game>();
+        var right = new List<Game>();
+        for (int v = 0; v < part.Count; v++)
+        {
+            if (rule.Allows(Side.Left, part.Tints[v])) left.Add(ValueOf(part.After(v, Side.Left)));
+            if (rule.Allows(Side.Right, part.Tints[v])) right.Add(ValueOf(part.After(v, Side.Right)));
+        }
+        var value = _store.Make(left, right);
+        context.SetMemo(ruleset, representative, negated ? _store.Negate(value) : value);
+        return value;
+    }
+}
