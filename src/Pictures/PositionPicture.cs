@@ -14,6 +14,7 @@ public static class PositionPicture
         "toads-and-frogs" => ToadsAndFrogsPicture.Svg((Bramble.Rules.ToadsAndFrogs.ToadsAndFrogsPosition)position),
         "clobber" => StonePicture.Svg(position, ((Bramble.Rules.Clobber.ClobberPosition)position).Grid, "Clobber"),
         "konane" => StonePicture.Svg(position, ((Bramble.Rules.Konane.KonanePosition)position).Grid, "Konane"),
+        "snort" or "col" => GraphGamePicture.Svg((Bramble.Rules.GraphGames.ColouringPosition)position),
         _ => throw new ArgumentException($"no picture for ruleset '{position.Ruleset.Name}' yet"),
     };
 }

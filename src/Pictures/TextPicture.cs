@@ -14,6 +14,7 @@ public static class TextPicture
             "A move takes a stone onto an orthogonal neighbour of the other colour: b2-c2. Left plays x, Right plays o."),
         "konane" => StonePicture.Text(position, ((Bramble.Rules.Konane.KonanePosition)position).Grid,
             "A move jumps a stone over opposing stones into empty squares along a line: c3-c5. Left plays x, Right plays o."),
+        "snort" or "col" => GraphGamePicture.Text((Bramble.Rules.GraphGames.ColouringPosition)position),
         _ => Generic(position),
     };
 

@@ -273,6 +273,8 @@ public sealed class TerminalGame(IPosition start, Side human, Side firstMover, I
         ("toads-and-frogs", Side.Right) => " (the frogs, F)",
         ("cutcake", Side.Left) => " (cuts between columns)",
         ("cutcake", Side.Right) => " (cuts between rows)",
+        ("snort" or "col", Side.Left) => " (colours vertices blue)",
+        ("snort" or "col", Side.Right) => " (colours vertices red)",
         _ => "",
     };
 }
