@@ -24,23 +24,46 @@ public static class CanonicalLabelling
     /// <summary>How many complete orders are compared at most, beyond <see cref="AlwaysExact"/> vertices.</summary>
     public const int LeafCap = 512;
 
-    /// <summary>The key text: per vertex in canonical order, its tint digit and the later neighbours' positions (hex).</summary>
+    /// <summary>
+    /// The key text: the tinted graph in canonical order, written in the position notation (so a
+    /// database can tell a key's size by reading it): vertices 1..n, and for each tinted vertex a
+    /// coloured leaf numbered from n+1, e.g. <c>[1-2,2-3,1-4B]</c>.
+    /// </summary>
     public static string Key(int[][] adjacency, byte[] tints)
     {
         int n = tints.Length;
-        if (n == 0) return "";
+        if (n == 0) return "0";
         var colours = new int[n];
         for (int i = 0; i < n; i++) colours[i] = tints[i];
         Rank(colours, colours.Select(c => (long)c).ToArray());
         Refine(adjacency, colours);
         var search = new Search(adjacency, tints);
         search.Descend(colours);
-        return search.Best!;
+        return Notation(adjacency, tints, search.BestOrder!);
+    }
+
+    private static string Notation(int[][] adjacency, byte[] tints, int[] order)
+    {
+        int n = order.Length;
+        var position = new int[n];
+        for (int i = 0; i < n; i++) position[order[i]] = i;
+        var items = new List<string>();
+        int leaf = n + 1;
+        for (int i = 0; i < n; i++)
+        {
+            int v = order[i];
+            bool any = adjacency[v].Length > 0 || tints[v] != 0;
+            foreach (int j in adjacency[v].Select(u => position[u]).Where(j => j > i).Order()) items.Add($"{i + 1}-{j + 1}");
+            if (tints[v] != 0) items.Add($"{i + 1}-{leaf++}{(tints[v] == ColouringRuleExtensions.NextToBlue ? 'B' : 'R')}");
+            if (!any) items.Add($"{i + 1}");
+        }
+        return "[" + string.Join(",", items) + "]";
     }
 
     private sealed class Search(int[][] adjacency, byte[] tints)
     {
         public string? Best;
+        public int[]? BestOrder;
         private int _leaves;
         private readonly int _cap = tints.Length <= AlwaysExact ? int.MaxValue : LeafCap;
 
@@ -56,7 +79,12 @@ public static class CanonicalLabelling
             {
                 _leaves++;
                 string text = Encode(colours);
-                if (Best is null || string.CompareOrdinal(text, Best) < 0) Best = text;
+                if (Best is null || string.CompareOrdinal(text, Best) < 0)
+                {
+                    Best = text;
+                    BestOrder = new int[n];
+                    for (int v = 0; v < n; v++) BestOrder[colours[v]] = v;
+                }
                 return;
             }
             for (int v = 0; v < n; v++)

@@ -47,6 +47,8 @@ public class ColouringPropertyTests
             {
                 Assert.Equal(position.NormalKey, renamedPosition.NormalKey);
                 relabelChecked++;
+                // A key is itself a position (the part in canonical order, tints as coloured leaves) with that key.
+                foreach (var key in BareKeys(position)) Assert.Equal(key, ReadKey(rules, key).NormalKey);
             }
             // Derived from the rules: exchanging the colours exchanges the players, so keys flip sign.
             var swappedPosition = rules.Parse(plain.Swapped().Text());
@@ -60,6 +62,18 @@ public class ColouringPropertyTests
         }
         Assert.True(split > 300, $"only {split} positions split");
         Assert.True(relabelChecked > 2000, $"only {relabelChecked} renamings compared");
+    }
+
+    private static IPosition ReadKey(IRuleset rules, string key)
+    {
+        try
+        {
+            return rules.Parse(key);
+        }
+        catch (PositionSyntaxException e)
+        {
+            throw new InvalidOperationException($"key {key}: {e.Message}");
+        }
     }
 
     private static List<string> BareKeys(IPosition position) =>
