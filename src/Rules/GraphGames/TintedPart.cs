@@ -26,8 +26,31 @@ public sealed class TintedPart
     /// <summary>Per vertex, <see cref="ColouringRuleExtensions.NextToBlue"/> and/or <see cref="ColouringRuleExtensions.NextToRed"/> (never both).</summary>
     public byte[] Tints { get; }
 
-    /// <summary>Per vertex, its index in the graph (or part) it was cut from.</summary>
+    /// <summary>Per vertex, its index in the coloured graph the first part was cut from (kept through moves).</summary>
     public int[] Origin { get; }
+
+    /// <summary>
+    /// The part as three masks over the original graph's vertex indices (its vertices, those next
+    /// to blue, those next to red), or null when an index is 64 or more. Within one graph equal
+    /// traces are equal parts, so a search can recognise a part reached by another move order
+    /// without computing its key.
+    /// </summary>
+    public (ulong Vertices, ulong NextToBlue, ulong NextToRed)? Trace
+    {
+        get
+        {
+            ulong vertices = 0, blue = 0, red = 0;
+            for (int i = 0; i < Origin.Length; i++)
+            {
+                if (Origin[i] >= 64) return null;
+                ulong bit = 1UL << Origin[i];
+                vertices |= bit;
+                if ((Tints[i] & ColouringRuleExtensions.NextToBlue) != 0) blue |= bit;
+                if ((Tints[i] & ColouringRuleExtensions.NextToRed) != 0) red |= bit;
+            }
+            return (vertices, blue, red);
+        }
+    }
 
     public int Count => Tints.Length;
 
@@ -58,7 +81,11 @@ public sealed class TintedPart
         foreach (int u in Adjacency[v]) tints[u] |= mark;
         var alive = new bool[Count];
         for (int i = 0; i < Count; i++) alive[i] = i != v && tints[i] != ColouringRuleExtensions.Dead;
-        return Split(Adjacency, tints, alive);
+        var parts = Split(Adjacency, tints, alive);
+        // Split numbers the new parts by this part's vertices; keep the original graph's indices instead.
+        foreach (var part in parts)
+            for (int i = 0; i < part.Origin.Length; i++) part.Origin[i] = Origin[part.Origin[i]];
+        return parts;
     }
 
     /// <summary>The connected parts of the live vertices, each renumbered in increasing order.</summary>

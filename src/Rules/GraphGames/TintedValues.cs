@@ -13,6 +13,10 @@ public sealed class TintedValues(IRuleset ruleset, ColouringRule rule, ValueCont
 {
     private readonly GameStore _store = context.Store;
 
+    // Parts met in this search by their traces: move orders that transpose reach the same part
+    // again and again, and this finds it without working out its canonical key.
+    private readonly Dictionary<(ulong, ulong, ulong), Game> _seen = new();
+
     public Game ValueOf(IEnumerable<TintedPart> parts)
     {
         var total = _store.Zero;
@@ -21,6 +25,15 @@ public sealed class TintedValues(IRuleset ruleset, ColouringRule rule, ValueCont
     }
 
     public Game ValueOf(TintedPart part)
+    {
+        var trace = part.Trace;
+        if (trace is { } t && _seen.TryGetValue(t, out var again)) return again;
+        var value = Search(part);
+        if (trace is { } t2) _seen[t2] = value;
+        return value;
+    }
+
+    private Game Search(TintedPart part)
     {
         string key = part.SignedKey;
         bool negated = key.Length > 0 && key[0] == '-';
