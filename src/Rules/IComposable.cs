@@ -31,6 +31,12 @@ public interface IComposable
     IPosition SumOf(IReadOnlyList<IPosition> components);
 
     /// <summary>
+    /// False when <see cref="ComponentsOfSize"/> lists only some kinds of components (its
+    /// <see cref="Facts"/> then say which): a search that finds nothing proves nothing beyond them.
+    /// </summary>
+    bool ListsEveryComponent => true;
+
+    /// <summary>
     /// A proved lower bound on the size of any position whose value is <paramref name="target"/>
     /// (for instance from the target's birthday: a game lasting at most n moves has birthday at most n).
     /// </summary>

@@ -43,6 +43,7 @@ public static class WebBoard
         var analysis = new Analysis(contexts);
         var opponents = new Opponents(contexts, options.Engines);
         var journals = new Journals(contexts);
+        var composing = new Composing(contexts);
         app.Lifetime.ApplicationStopping.Register(() => options.Engines.DisposeAsync().AsTask().Wait(TimeSpan.FromSeconds(5)));
 
         app.Use(async (http, next) =>
@@ -78,6 +79,7 @@ public static class WebBoard
         Post<ThermographRequest>(app, "/api/thermograph", (r, cancel) =>
             Task.Run<object>(() => analysis.Thermograph(r, Analysis.DefaultBudgetMs, cancel), cancel));
         Post<DescribeRequest>(app, "/api/describe", (r, _) => Task.FromResult<object>(Editor.Describe(r)));
+        Post<ComposeRequest>(app, "/api/compose", (r, cancel) => Task.Run<object>(() => composing.Compose(r, cancel), cancel));
         Post<JournalRequest>(app, "/api/journal", (r, _) => Task.FromResult<object>(Journals.Read(r.Text)));
         Post<AnalyseRequest>(app, "/api/replay", (r, cancel) => Task.Run<object>(() => journals.Replay(r, cancel), cancel));
         app.Map("/api/{**rest}", (HttpContext http) =>

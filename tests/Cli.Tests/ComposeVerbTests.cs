@@ -37,6 +37,19 @@ public class ComposeVerbTests
     }
 
     [Fact]
+    public void KonaneSaysItsListingCoversOnlyOpenBoardGroups()
+    {
+        var (exit, output, err) = ConsoleRunner.Run("compose", "konane", "2", "--max-size", "4");
+        Assert.True(exit == 0, err);
+        // Nothing of up to 4 stones is 2 (the first is 5 stones); the listing is restricted, so the answer says "listed" and the note says which.
+        Assert.Contains("found      none: no listed position of up to 4 stones has this value (see the note)", output);
+        Assert.Contains("every listed position (see the note) of up to 4 stones", output);
+        Assert.Contains("open board", output);
+        var (_, json, _) = ConsoleRunner.Run("compose", "konane", "2", "--max-size", "4", "--json");
+        Assert.True(JsonDocument.Parse(json).RootElement.GetProperty("restricted").GetBoolean());
+    }
+
+    [Fact]
     public void NoneWithinTheBoundIsSaidAndExitsZero()
     {
         var (exit, output, err) = ConsoleRunner.Run("compose", "hackenbush", "1/64", "--max-size", "4");

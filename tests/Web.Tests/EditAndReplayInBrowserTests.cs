@@ -79,6 +79,41 @@ public sealed class EditAndReplayInBrowserTests(BrowserFixture browser)
         Assert.Equal(cli.Value, await page.TextContentAsync("#edit-analysis [data-field='value']"));
     }
 
+    [Fact]
+    public async Task ComposeFindsDomineeringRegionsOfAValueAndLoadsOneIntoTheEditor()
+    {
+        var page = await browser.OpenAsync();
+        await page.ClickAsync("#tabs [data-view='edit']");
+        await page.SelectOptionAsync("#edit-ruleset", "domineering");
+        await page.WaitForSelectorAsync("#edit-rows");
+        await page.FillAsync("#compose-value", "*");
+        await page.SelectOptionAsync("#compose-count", "3");
+        await page.ClickAsync("#compose-go");
+        await page.WaitForSelectorAsync("#compose-results [data-use]");
+        var texts = await page.Locator("#compose-results code").AllTextContentsAsync();
+        Assert.NotEmpty(texts);
+        // Every region shown is * by `bramble value`'s own code path.
+        foreach (var t in texts)
+            Assert.Equal("*", BigStack.Run(() => ValueVerb.Analyse("domineering", t, ascii: false, new ValueContext())).Value);
+        await browser.ShotAsync(page, "edit-compose");
+        await page.ClickAsync("#compose-results [data-use] >> nth=0");
+        await page.WaitForFunctionAsync("t => document.querySelector('#edit-text').value === t", texts[0]);
+        await page.WaitForSelectorAsync("#edit-analysis[data-done='true'] [data-field='value']");
+        Assert.Equal("*", await page.TextContentAsync("#edit-analysis [data-field='value']"));
+    }
+
+    [Fact]
+    public async Task ComposeShowsBadValueNotationWithItsCaret()
+    {
+        var page = await browser.OpenAsync();
+        await page.ClickAsync("#tabs [data-view='edit']");
+        await page.FillAsync("#compose-value", "{1|");
+        await page.ClickAsync("#compose-go");
+        await page.WaitForSelectorAsync("#compose-caret:not([hidden])");
+        Assert.StartsWith("bad value: column", await page.TextContentAsync("#compose-error"));
+        Assert.Contains("^", await page.TextContentAsync("#compose-caret"));
+    }
+
     /// <summary>A small journal of our own: games between a random player and the perfect one, reviewed for blunders as the harness does.</summary>
     private static (string Path, GameRecord Game) Journal()
     {

@@ -56,41 +56,15 @@ public static class ComposeVerb
         var w = new StringWriter();
         string unit = r.SizeUnit;
         w.WriteLine($"target     {store.Format(r.Target)}  ({r.Ruleset.Name})");
-        if (r.Positions.Count == 0) w.WriteLine($"found      none{NoneReason(r)}");
+        if (r.Positions.Count == 0) w.WriteLine($"found      none{r.NoneReason()}");
         int i = 1;
         foreach (var p in r.Positions)
             w.WriteLine($"  {i++,3}. {p.Position.Text}   ({p.Size} {unit}, {(p.Route == ComposeRoute.Construction ? "constructed" : "found by search")})");
-        w.WriteLine($"searched   {Searched(r)}");
-        w.WriteLine($"stopped    {StopText(r)}");
+        w.WriteLine($"searched   {r.Searched()}");
+        w.WriteLine($"stopped    {r.Stopped()}");
         foreach (var note in r.Notes) w.WriteLine($"note       {note}");
         return w.ToString().TrimEnd();
     }
-
-    private static string NoneReason(ComposeReport r) => r.Stop switch
-    {
-        ComposeStop.RuledOut => ": no position of this ruleset has this value (see the note)",
-        _ when r.LeastSize > r.Bound => $": a position of this value has at least {r.LeastSize} {r.SizeUnit} (its birthday), more than the bound {r.Bound}",
-        ComposeStop.Bound when !r.Sampled => $": no position of up to {r.Bound} {r.SizeUnit} has this value",
-        _ => "",
-    };
-
-    private static string Searched(ComposeReport r)
-    {
-        var what = r.Sampled ? "sampled components" : "every position";
-        var range = r.SearchedThrough < r.LeastSize
-            ? $"sizes below {r.LeastSize} ruled out by the birthday bound; no size looked at in full"
-            : $"{what} of up to {r.SearchedThrough} {r.SizeUnit} (sizes below {r.LeastSize} ruled out by the birthday bound)";
-        return $"{range}; {r.ComponentsTried:N0} components valued, {r.SumsTried:N0} sums tried, {r.ElapsedMs:N0} ms";
-    }
-
-    private static string StopText(ComposeReport r) => r.Stop switch
-    {
-        ComposeStop.Enough => $"found the {r.Positions.Count} asked for",
-        ComposeStop.Bound => $"reached the size bound {r.Bound}",
-        ComposeStop.ListingLimit => $"sizes above {r.SearchedThrough} only as sums of smaller components (listing stops there)",
-        ComposeStop.Budget => "the time budget ran out",
-        _ => "ruled out",
-    };
 
     public static string ToJson(ComposeReport r, GameStore store)
     {
@@ -100,7 +74,7 @@ public static class ComposeVerb
             {
                 ["text"] = p.Position.Text,
                 ["size"] = p.Size,
-                ["route"] = p.Route == ComposeRoute.Construction ? "construction" : "search",
+                ["route"] = p.RouteWord(),
                 ["found_ms"] = p.FoundMs,
             });
         var o = new JsonObject
@@ -113,6 +87,7 @@ public static class ComposeVerb
             ["bound"] = r.Bound,
             ["searched_through"] = r.SearchedThrough,
             ["sampled"] = r.Sampled,
+            ["restricted"] = r.Restricted,
             ["components_tried"] = r.ComponentsTried,
             ["sums_tried"] = r.SumsTried,
             ["elapsed_ms"] = r.ElapsedMs,

@@ -34,27 +34,10 @@ internal static class ClobberComposition
         }
     }
 
-    /// <summary>The groups side by side, an empty column between neighbours (or one under another, an empty row between, when too wide).</summary>
-    public static IPosition SumOf(ClobberRuleset ruleset, IReadOnlyList<IPosition> components)
-    {
-        var grids = components.Select(c => ((ClobberPosition)c).Grid).ToList();
-        if (grids.Count == 0) return ruleset.Parse(".");
-        if (grids.Count == 1) return components[0];
-        int wide = grids.Sum(g => g.Columns) + grids.Count - 1;
-        bool across = wide <= StoneGrid.MaxColumns;
-        int rows = across ? grids.Max(g => g.Rows) : grids.Sum(g => g.Rows) + grids.Count - 1;
-        int columns = across ? wide : grids.Max(g => g.Columns);
-        var cells = new Stone[rows * columns];
-        int at = 0;
-        foreach (var g in grids)
-        {
-            for (int r = 0; r < g.Rows; r++)
-                for (int c = 0; c < g.Columns; c++)
-                    cells[across ? r * columns + at + c : (at + r) * columns + c] = g.At(r, c);
-            at += (across ? g.Columns : g.Rows) + 1;
-        }
-        return new ClobberPosition(ruleset, new StoneGrid(rows, columns, cells));
-    }
+    /// <summary>The groups side by side, an empty column or row between neighbours (a stone never moves onto an empty square).</summary>
+    public static IPosition SumOf(ClobberRuleset ruleset, IReadOnlyList<IPosition> components) => components.Count == 1
+        ? components[0]
+        : new ClobberPosition(ruleset, StoneLayout.SideBySide(components.Select(c => ((ClobberPosition)c).Grid).ToList()));
 
     public static int LeastSize(Game target, GameStore store) => target == store.Zero ? 0 : store.Birthday(target) + 1;
 

@@ -6,7 +6,8 @@ namespace Bramble.Rules.Compose;
 /// What a compose run found and how far it went. <see cref="SearchedThrough"/> is the largest
 /// size n such that every position of size at most n was looked at (−1: none); with
 /// <see cref="Sampled"/> the components came from random generators, so even those sizes were
-/// only sampled.
+/// only sampled; with <see cref="Restricted"/> the ruleset listed only some kinds of components
+/// (the notes say which), so "every position" means every listed one.
 /// </summary>
 public sealed record ComposeReport(
     IRuleset Ruleset,
@@ -17,6 +18,7 @@ public sealed record ComposeReport(
     int Bound,
     int SearchedThrough,
     bool Sampled,
+    bool Restricted,
     long ComponentsTried,
     long SumsTried,
     long ElapsedMs,

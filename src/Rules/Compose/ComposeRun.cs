@@ -86,7 +86,7 @@ internal sealed class ComposeRun(
     private bool Enough => _found.Count >= settings.Count;
 
     private ComposeReport Report(int least, int bound, int searched, ComposeStop stop) => new(
-        ruleset, target, _found.OrderBy(p => p.Size).ToList(), source.SizeUnit, least, bound, searched, sampled,
+        ruleset, target, _found.OrderBy(p => p.Size).ToList(), source.SizeUnit, least, bound, searched, sampled, !source.ListsEveryComponent,
         _componentsTried, _sumsTried, _clock.ElapsedMilliseconds, stop, _notes);
 
     /// <summary>Lists and values every component of one size.</summary>

@@ -12,7 +12,7 @@ namespace Bramble.Rules.Konane;
 /// exchange of colours (negatives). Positions are given as they stand: the opening removals of
 /// the traditional game are made by the players before the position is written down.
 /// </summary>
-public sealed class KonaneRuleset : IRuleset, IComponentCatalogue
+public sealed class KonaneRuleset : IRuleset, IComponentCatalogue, IComposable
 {
     public string Name => "konane";
 
@@ -63,4 +63,23 @@ public sealed class KonaneRuleset : IRuleset, IComponentCatalogue
                 }
             }
     }
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    // Compose counts stones (a position's size); the database lists boards by squares.
+    string IComposable.SizeUnit => "stones";
+
+    public int ListingLimit => 8;
+
+    public bool ListsEveryComponent => false;
+
+    public int DefaultSearchSize => 6;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => KonaneComposition.ComponentsOfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) => KonaneComposition.SumOf(this, components);
+
+    public int LeastSize(Game target, GameStore store) => KonaneComposition.LeastSize(target, store);
+
+    public TargetFacts Facts(Game target, GameStore store) => KonaneComposition.Facts();
 }

@@ -10,7 +10,7 @@ namespace Bramble.Rules.ToadsAndFrogs;
 /// whose pieces can never move again; each stretch's value is searched once for it and for its
 /// mirror image with the roles swapped.
 /// </summary>
-public sealed class ToadsAndFrogsRuleset : IRuleset, IComponentCatalogue
+public sealed class ToadsAndFrogsRuleset : IRuleset, IComponentCatalogue, IComposable
 {
     public string Name => "toads-and-frogs";
 
@@ -50,4 +50,16 @@ public sealed class ToadsAndFrogsRuleset : IRuleset, IComponentCatalogue
             }
         }
     }
+
+    // ------------------------------------------------------------------ IComposable (bramble compose)
+
+    public int ListingLimit => 12;
+
+    public int DefaultSearchSize => 8;
+
+    public IEnumerable<IPosition> ComponentsOfSize(int size) => ToadsAndFrogsComposition.ComponentsOfSize(this, size);
+
+    public IPosition SumOf(IReadOnlyList<IPosition> components) => ToadsAndFrogsComposition.SumOf(this, components);
+
+    public int LeastSize(Game target, GameStore store) => ToadsAndFrogsComposition.LeastSize(target, store);
 }

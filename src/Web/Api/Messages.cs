@@ -51,3 +51,16 @@ public sealed record JournalRequest
 {
     public string? Text { get; init; }
 }
+
+/// <summary>
+/// A value to find positions of: the ruleset, the target in value notation, and optional bounds
+/// (largest size, how many positions, a time budget in milliseconds; all capped by the server).
+/// </summary>
+public sealed record ComposeRequest
+{
+    public string? Ruleset { get; init; }
+    public string? Value { get; init; }
+    public int? MaxSize { get; init; }
+    public int? Count { get; init; }
+    public int? BudgetMs { get; init; }
+}

@@ -106,3 +106,23 @@ public sealed record BlunderReply(int Ply, string By);
 public sealed record ReplayReply(IReadOnlyList<ReplayPlyReply> Plies, bool Exact);
 
 public sealed record ReplayPlyReply(int Ply, string? Side, string? Move, string Text, string ToMove, string? Svg, string? Value, string? Outcome, string? Winner);
+
+/// <summary>One position found for a target value: its notation, its size and whether a construction or the search gave it.</summary>
+public sealed record ComposedReply(string Text, int Size, string Route, long FoundMs);
+
+/// <summary>
+/// What compose found for a target, and how far it went, in the words the command line prints:
+/// <c>None</c> says why nothing was found (null when something was), <c>Notes</c> the facts of
+/// the field about the target, each with its source.
+/// </summary>
+public sealed record ComposeReply(
+    string Ruleset,
+    string Target,
+    IReadOnlyList<ComposedReply> Positions,
+    string SizeUnit,
+    string? None,
+    string Searched,
+    string Stopped,
+    string Stop,
+    IReadOnlyList<string> Notes,
+    long ElapsedMs);

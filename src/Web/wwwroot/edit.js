@@ -1,6 +1,7 @@
 // The Edit view: type a position, or build it — Hackenbush edges between points or from the
 // ground (recolour, delete), a Domineering board's size and holes, Forms terms. The notation
 // updates as you build, can be copied for the command line, and is analysed after every change.
+// Below the analysis, compose finds positions of the chosen game whose value is one you type.
 import { Slot, post, isAbort, caret } from './api.js';
 import { show, moveOf } from './board.js';
 import { AnalysisPanel } from './analysis.js';
@@ -11,6 +12,7 @@ const letter = { blue: 'B', red: 'R', green: 'G' };
 
 export class EditView {
   #board = new Slot();
+  #compose = new Slot();
   #timer = 0;
   constructor(setup, play, showView) {
     this.setup = setup;
@@ -23,6 +25,12 @@ export class EditView {
     $('edit-copy').onclick = () => this.copy();
     $('edit-play').onclick = () => { play.start(this.ruleset(), $('edit-text').value.trim()); showView('play'); };
     $('edit-board').onclick = e => this.clickBoard(e);
+    $('compose-form').onsubmit = e => { e.preventDefault(); this.compose(); };
+    $('compose-stop').onclick = () => this.#compose.cancel();
+    $('compose-results').onclick = e => {
+      const use = e.target.closest('[data-use]');
+      if (use) this.load(use.dataset.use);
+    };
     this.load(this.example());
   }
 
@@ -183,6 +191,42 @@ export class EditView {
     this.selected = null;
     this.changed();
     $('edit-help').textContent = before > s.edges.length ? `Also removed ${before - s.edges.length} edge(s) that no longer touched the ground.` : '';
+  }
+
+  /** Asks the server for positions of the chosen game whose value is the one typed; each can be loaded into the editor. */
+  async compose() {
+    const value = $('compose-value').value.trim();
+    $('compose-error').textContent = '';
+    $('compose-caret').hidden = true;
+    $('compose-results').innerHTML = '';
+    $('compose-notes').innerHTML = '';
+    $('compose-searched').textContent = '';
+    if (!value) { $('compose-error').textContent = 'Type a value first, e.g. ↑ or {1|-1}.'; return; }
+    const budget = 5000;
+    $('compose-status').textContent = `Searching ${this.ruleset()} positions of value ${value} (up to ${budget / 1000} s)…`;
+    $('compose-stop').hidden = false;
+    try {
+      const r = await this.#compose.post('/api/compose',
+        { ruleset: this.ruleset(), value, count: Number($('compose-count').value), budget_ms: budget });
+      const found = r.positions.length;
+      $('compose-status').textContent = found
+        ? `${found} position${found === 1 ? '' : 's'} of value ${r.target}, smallest first:`
+        : `Found ${r.none}.`;
+      $('compose-searched').textContent = `Searched ${r.searched}. Stopped: ${r.stopped}.`;
+      $('compose-results').innerHTML = r.positions.map(p => `<li><code>${esc(p.text)}</code>
+        <span class="help">${p.size} ${esc(r.size_unit)}, by ${p.route}</span>
+        <button type="button" data-use="${esc(p.text)}">Edit this</button></li>`).join('');
+      $('compose-notes').innerHTML = r.notes.map(n => `<li>${esc(n)}</li>`).join('');
+    } catch (e) {
+      if (isAbort(e)) { $('compose-status').textContent = 'Stopped.'; return; }
+      $('compose-status').textContent = '';
+      $('compose-error').textContent = e.message;
+      const c = caret(e);
+      $('compose-caret').hidden = !c;
+      $('compose-caret').textContent = c ?? '';
+    } finally {
+      $('compose-stop').hidden = true;
+    }
   }
 
   async copy() {
