@@ -1,4 +1,3 @@
-using Bramble.Rules;
 using Bramble.Values;
 using static Bramble.Web.Tests.PageActions;
 
@@ -8,20 +7,13 @@ namespace Bramble.Web.Tests;
 [Collection("browser")]
 public sealed class GraphGamesInBrowserTests(BrowserFixture browser)
 {
-    private static Side ExactWinner(string ruleset, string text, Side toMove)
-    {
-        var rules = Rulesets.Get(ruleset);
-        var context = new ValueContext();
-        return context.Store.OutcomeOf(rules.Value(rules.Parse(text), context)).WinnerMovingFirst(toMove);
-    }
-
     [Theory]
     [InlineData("snort", "[1-2-3,2-4] + P4")]
     [InlineData("col", "[1-2-3-4,4-5R] + [6-7]")]
     public async Task GamePlayedByClickingVerticesEndsWithTheRightWinner(string ruleset, string start)
     {
         // Left moving first wins both (the engine's exact analysis, cross-checked against plain search in Rules.Tests).
-        Assert.Equal(Side.Left, ExactWinner(ruleset, start, Side.Left));
+        Assert.Equal(Side.Left, PlayInBrowserTests.ExactWinner(ruleset, start, Side.Left));
         var page = await browser.OpenAsync();
         await NewGameAsync(page, ruleset, start, "perfect", "left", "you");
         for (int turn = 0; turn < 20 && await page.GetAttributeAsync("#play-board", "data-over") != "true"; turn++)

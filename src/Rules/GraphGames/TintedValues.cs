@@ -33,22 +33,13 @@ public sealed class TintedValues(IRuleset ruleset, ColouringRule rule, ValueCont
         return value;
     }
 
-    private Game Search(TintedPart part)
-    {
-        string key = part.SignedKey;
-        bool negated = key.Length > 0 && key[0] == '-';
-        string representative = negated ? key[1..] : key;
-        if (context.TryGetMemo(ruleset, representative, out var known)) return negated ? _store.Negate(known) : known;
-        context.Tick();
-        var left = new List<Game>();
-        var right = new List<Game>();
-        for (int v = 0; v < part.Count; v++)
+    private Game Search(TintedPart part) =>
+        Common.ComponentValues.Memoised(ruleset, context, part.SignedKey, (left, right) =>
         {
-            if (rule.Allows(Side.Left, part.Tints[v])) left.Add(ValueOf(part.After(v, Side.Left)));
-            if (rule.Allows(Side.Right, part.Tints[v])) right.Add(ValueOf(part.After(v, Side.Right)));
-        }
-        var value = _store.Make(left, right);
-        context.SetMemo(ruleset, representative, negated ? _store.Negate(value) : value);
-        return value;
-    }
+            for (int v = 0; v < part.Count; v++)
+            {
+                if (rule.Allows(Side.Left, part.Tints[v])) left.Add(ValueOf(part.After(v, Side.Left)));
+                if (rule.Allows(Side.Right, part.Tints[v])) right.Add(ValueOf(part.After(v, Side.Right)));
+            }
+        });
 }

@@ -2,14 +2,8 @@ using Bramble.Values;
 
 namespace Bramble.Rules.Tests.GraphGames;
 
-public class ColTests
+public class ColTests() : GraphGameFixture("col")
 {
-    private readonly IRuleset _rules = Rulesets.Get("col");
-    private readonly ValueContext _context = new();
-    private GameStore Store => _context.Store;
-
-    private Game V(string text) => _rules.Value(_rules.Parse(text), _context);
-
     [Fact]
     public void LoneVertexIsStarAndTintedVertexIsOneMove()
     {
@@ -61,7 +55,7 @@ public class ColTests
             // Winning Ways, ch. 2 and 6 (from memory): Col is cold (temperature at most 0), Snort hot.
             Assert.True(Store.Temperature(V(text)) <= Dyadic.Zero, text);
             var snort = Rulesets.Get("snort");
-            Assert.True(Store.Temperature(snort.Value(snort.Parse(text), _context)) > Dyadic.Zero, text);
+            Assert.True(Store.Temperature(snort.Value(snort.Parse(text), Context)) > Dyadic.Zero, text);
         }
     }
 }

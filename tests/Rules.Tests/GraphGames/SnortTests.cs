@@ -2,14 +2,8 @@ using Bramble.Values;
 
 namespace Bramble.Rules.Tests.GraphGames;
 
-public class SnortTests
+public class SnortTests() : GraphGameFixture("snort")
 {
-    private readonly IRuleset _rules = Rulesets.Get("snort");
-    private readonly ValueContext _context = new();
-    private GameStore Store => _context.Store;
-
-    private Game V(string text) => _rules.Value(_rules.Parse(text), _context);
-
     [Fact]
     public void LoneVertexIsStarAndTintedVertexIsOneMove()
     {
@@ -74,7 +68,7 @@ public class SnortTests
     [Fact]
     public void MovesAreVertexNumbersAndIllegalOnesAreExplained()
     {
-        var p = _rules.Parse("[1-2B-3,3-4,5]");
+        var p = Rules.Parse("[1-2B-3,3-4,5]");
         Assert.Equal(["1", "3", "4", "5"], p.Moves(Side.Left).Select(p.FormatMove));
         Assert.Equal(["4", "5"], p.Moves(Side.Right).Select(p.FormatMove));
         Assert.Equal("[1-2B-3-4R,5]", p.Play(Side.Right, p.ParseMove("v4")).Text);
