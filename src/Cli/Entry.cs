@@ -12,7 +12,7 @@ public static class Entry
     public const int JobFailed = 1;
     public const int BadInput = 2;
 
-    public static readonly Option<FileInfo?> LogOption = new("--log") { Description = "Write log events to this file", Recursive = true };
+    public static readonly Option<FileInfo?> LogOption = new("--log") { Description = "Write log events to this file", Recursive = true, HelpName = "FILE" };
     public static readonly Option<bool> VerboseOption = new("--verbose") { Description = "Log debug events too", Recursive = true };
 
     public static RootCommand BuildRoot()
@@ -92,11 +92,11 @@ public static class Entry
             }
             if (IsHelpOrVersion(args))
             {
-                // The library writes a subcommand's usage under its parent's arguments
+                // The library lists a subcommand's parents' arguments in its help too
                 // ("bramble match [<spec>] merge"); the help is caught and tidied.
                 var help = new StringWriter();
                 int code = parse.Invoke(new InvocationConfiguration { Output = help });
-                Console.Out.Write(help.ToString().Replace("match [<spec>] merge", "match merge", StringComparison.Ordinal));
+                Console.Out.Write(SubcommandHelp.Tidy(parse.CommandResult.Command, help.ToString()));
                 return code;
             }
             return parse.Invoke();

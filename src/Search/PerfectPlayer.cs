@@ -13,8 +13,8 @@ namespace Bramble.Search;
 /// real moves in the large components and canonical options in the rest. Among the real moves the
 /// player picks one after which the opponent, moving first, loses.
 /// <para>
-/// In a lost position it plays the move that leaves the opponent the fewest winning replies
-/// (counted over all the opponent's real moves), ties going to the move Thermostrat ranks highest.
+/// In a lost position it plays the best swindle it finds by exact analysis of every reply
+/// (<see cref="SwindleScore"/>: fewest and least obvious winning replies, smallest margin, longest game).
 /// Past its budget it answers with Thermostrat's move, chosen within a share of the time kept back
 /// for it (estimated thermographs for components without an exact value), and reports
 /// <c>Exact = false</c> and, when it read an estimate, <c>Estimated = true</c> (docs/players.md).
@@ -119,12 +119,13 @@ public sealed class PerfectPlayer : IPlayer
     }
 
     /// <summary>
-    /// In a lost position: the move after which the opponent has the fewest winning replies. When
-    /// the count itself runs out of budget, Thermostrat's move; the loss is exact either way.
+    /// In a lost position: the best swindle (<see cref="SwindleScore"/>): the move after which the
+    /// opponent's winning replies are fewest among many and least obvious, then the smallest
+    /// margin, then the longest game, then Thermostrat's order. When the count itself runs out of
+    /// budget, Thermostrat's move; the loss is exact either way.
     /// </summary>
     private Decision Lost(IPosition position, Side side, SearchBudget b, IReadOnlyList<ValuedComponent> components, List<Candidate> candidates)
     {
-        var other = side.Other();
         IReadOnlyList<Move> ranking;
         try
         {
@@ -135,22 +136,15 @@ public sealed class PerfectPlayer : IPlayer
             ranking = [];
         }
         Move? best = null;
-        int fewest = int.MaxValue;
-        int bestRank = int.MaxValue;
+        SwindleScore bestScore = default;
         try
         {
             foreach (var c in candidates)
             {
-                var after = c.After(_large, side);
-                int winning = 0;
-                // Every real reply counts, including those in components equal to one already looked at.
-                foreach (var reply in Candidates(after, other, distinct: false))
-                    if (!_large.Wins(_large.Split(reply.After(_large, other)), side)) winning++;
-                int rank = IndexOf(ranking, c.Move);
-                if (winning < fewest || (winning == fewest && rank < bestRank))
+                var score = Swindle(position, c, side, IndexOf(ranking, c.Move), b);
+                if (best is null || score.IsBetterThan(bestScore))
                 {
-                    fewest = winning;
-                    bestRank = rank;
+                    bestScore = score;
                     best = c.Move;
                 }
             }
@@ -160,6 +154,46 @@ public sealed class PerfectPlayer : IPlayer
             best = ranking.Count > 0 ? ranking[0] : candidates[0].Move;
         }
         return Exact(position, best!.Value, b, components, winning: false);
+    }
+
+    /// <summary>
+    /// Scores the position a losing move of <paramref name="side"/> leaves: every real reply of the
+    /// opponent (including those in components equal to one already looked at) decided by the same
+    /// exact search; the obvious replies are the moves Hotstrat and Thermostrat would choose there.
+    /// </summary>
+    private SwindleScore Swindle(IPosition position, Candidate move, Side side, int rank, SearchBudget b)
+    {
+        var store = Context.Store;
+        var other = side.Other();
+        var after = move.After(_large, side);
+        var margin = Dyadic.Zero;
+        long length = 0;
+        foreach (var comp in after)
+        {
+            if (comp.Value is not { } v)
+            {
+                length += comp.Position.Size;
+                continue;
+            }
+            var mean = store.Mean(v);
+            margin += side == Side.Left ? mean : -mean;
+            length += store.Birthday(v);
+        }
+        var left = position.Play(side, move.Move);
+        var plain = new HashSet<Move>();
+        foreach (var rule in new[] { TemperatureRule.Hotstrat, TemperatureRule.Thermostrat })
+            if (_fallback.Choose(left, other, rule, b).Move is { } m) plain.Add(m);
+        int replies = 0, winning = 0, obvious = 0, obviousWinning = 0;
+        foreach (var reply in Candidates(after, other, distinct: false))
+        {
+            bool wins = !_large.Wins(_large.Split(reply.After(_large, other)), side);
+            bool seen = plain.Count == 0 || plain.Contains(reply.Move);
+            replies++;
+            if (wins) winning++;
+            if (seen) obvious++;
+            if (seen && wins) obviousWinning++;
+        }
+        return new SwindleScore(winning, replies, obviousWinning, obvious, margin, length, rank);
     }
 
     private static int IndexOf(IReadOnlyList<Move> ranking, Move move)

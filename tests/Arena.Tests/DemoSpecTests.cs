@@ -6,14 +6,28 @@ namespace Bramble.Arena.Tests;
 /// <summary>The built-in demo's match file, checked with the real rulesets (playing it is `bramble match`).</summary>
 public class DemoSpecTests
 {
-    private static string DemoPath()
+    private static string DemoPath() => MatchFile("demo.json");
+
+    private static string MatchFile(string name)
     {
         for (var folder = new DirectoryInfo(AppContext.BaseDirectory); folder is not null; folder = folder.Parent)
         {
-            var candidate = Path.Combine(folder.FullName, "matches", "demo.json");
+            var candidate = Path.Combine(folder.FullName, "matches", name);
             if (File.Exists(candidate)) return candidate;
         }
-        throw new FileNotFoundException("matches/demo.json not found above the test folder");
+        throw new FileNotFoundException($"matches/{name} not found above the test folder");
+    }
+
+    [Fact]
+    public void TheAllotmentMatchHasSixPositionsOfEachNewRulesetAndLimitsEveryPlayerByWork()
+    {
+        // The loader parses every position with its ruleset, so a bad line would fail here.
+        var spec = new MatchSpecLoader(RulesetFinders.Registry).Load(MatchFile("allotment.json"));
+        foreach (var ruleset in new[] { "clobber", "konane", "toads-and-frogs", "cutcake" })
+            Assert.Equal(6, spec.Positions.Count(p => p.Ruleset == ruleset));
+        Assert.All(spec.Players.Where(p => p.Run[3] != "random"), p => Assert.Contains("--nodes", p.Run));
+        // Derived from the definitions: 3 pairs × 24 positions × 2 seatings.
+        Assert.Equal(144, Scheduler.Build(spec).Count);
     }
 
     [Fact]

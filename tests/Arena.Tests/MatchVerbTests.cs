@@ -86,6 +86,44 @@ public class MatchVerbTests
     }
 
     [Fact]
+    public void ATinyMatchRunsInEachNewRuleset()
+    {
+        using var folder = new TempFolder();
+        folder.Write("suites/stones.txt", "# two clobber beds\nxoxo/oxox\nxxo/o.x/oxo\n");
+        folder.Write("suites/jumps.txt", "# two konane beds\nxo.o./..x../o.xo.\nx.xo/oxo./.o.x\n");
+        folder.Write("suites/pond.txt", "# two strips\nTT.F.TF.F\nT.TF.F#TF..F\n");
+        folder.Write("suites/tea.txt", "# two cakes\n4x9 + 3x3\n5x7\n");
+        var spec = folder.Spec(new
+        {
+            title = "Allotment trial",
+            positions = new object[]
+            {
+                new { file = "suites/stones.txt", ruleset = "clobber" },
+                new { file = "suites/jumps.txt", ruleset = "konane" },
+                new { file = "suites/pond.txt", ruleset = "toads-and-frogs" },
+                new { file = "suites/tea.txt", ruleset = "cutcake" },
+            },
+            players = new[]
+            {
+                new { id = "digger", run = new[] { "bramble", "engine", "--strategy", "perfect", "--nodes", "20000" } },
+                new { id = "scatter", run = new[] { "bramble", "engine", "--strategy", "random", "--seed", "5" } },
+            },
+            seats = "swap",
+            clock = new { base_ms = 20000, inc_ms = 100 },
+            parallel = 2,
+            journal = "results/allotment.jsonl",
+        });
+        var (code, output, error) = Run(folder.Path, "match", spec, "--json");
+        Assert.True(code == 0, error);
+        using var standings = JsonDocument.Parse(output);
+        // Derived from the definitions: one pair × 8 positions × 2 seatings.
+        Assert.Equal(16, standings.RootElement.GetProperty("games").GetInt32());
+        var records = JournalFile.Read(Path.Combine(folder.Path, "results", "allotment.jsonl")).Records;
+        Assert.Equal(["clobber", "cutcake", "konane", "toads-and-frogs"], records.Select(r => r.Ruleset).Distinct().Order(StringComparer.Ordinal));
+        Assert.All(records, r => Assert.NotNull(r.Theory));
+    }
+
+    [Fact]
     public void MergeRefusesConflictingJournals()
     {
         using var folder = new TempFolder();

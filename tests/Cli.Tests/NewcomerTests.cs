@@ -243,25 +243,6 @@ public class NewcomerTests
     }
 
     [Fact]
-    public void DatabaseBuildTakesSizeAndStillCells()
-    {
-        var (_, help, _) = ConsoleRunner.Run("db", "build", "--help");
-        Assert.Contains("--size", help);
-        Assert.DoesNotContain("--cells", help);
-        var path = Path.Combine(Path.GetTempPath(), $"bramble-{Guid.NewGuid():N}.db");
-        try
-        {
-            var (exit, _, err) = ConsoleRunner.Run("db", "build", "domineering", "--cells", "3", "--out", path);
-            Assert.True(exit == 0, err);
-            Assert.True(File.Exists(path));
-        }
-        finally
-        {
-            File.Delete(path);
-        }
-    }
-
-    [Fact]
     public void AnUnknownEngineOptionIsBadInputOnStderr()
     {
         var (exit, output, err) = ConsoleRunner.Run("engine", "--hashes", "64");

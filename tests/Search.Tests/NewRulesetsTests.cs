@@ -14,9 +14,11 @@ public class NewRulesetsTests
 
     [Theory]
     [InlineData("cutcake", "rectangles", 3)]
+    [InlineData("toads-and-frogs", "starts", 7)]
     [InlineData("toads-and-frogs", "strips", 8)]
     [InlineData("toads-and-frogs", "sums", 2)]
     [InlineData("clobber", "random", 7)]
+    [InlineData("clobber", "strips", 8)]
     [InlineData("konane", "random", 7)]
     [InlineData("konane", "strips", 9)]
     public void PerfectAndAlphabetaAgreeOnRandomPositions(string rulesetName, string generator, int size)

@@ -72,7 +72,7 @@ public class PerfectOnTreesTests
     }
 
     [Fact]
-    public void InALostPositionPerfectLeavesTheFewestWinningReplies()
+    public void InALostPositionPerfectLeavesTheLeastChanceOfAWinningReply()
     {
         var perfect = new PerfectPlayer();
         int lost = 0;
@@ -84,6 +84,45 @@ public class PerfectOnTreesTests
                 if (LostRule.Check(perfect, brute, position, side, Plenty)) lost++;
         }
         Assert.True(lost > 50, $"only {lost} lost positions were generated");
+    }
+
+    [Fact]
+    public void AmongLosingMovesPerfectLeavesOneWinningReplyAmongManyRatherThanOneAlone()
+    {
+        // Worked by hand from the definitions: S = { Qb, Qa | } with Qb = {| 0} and Qa = {| 0, 1, 1}.
+        // Both are -1 (Right's options 1 are dominated by 0), so S = {-1 |} = 0 and Left, moving
+        // first, loses. After either move Right has exactly one winning reply (to 0: Left, to move
+        // at 0, loses; at 1 Left moves to 0 and wins), so "fewest winning replies" cannot tell the
+        // moves apart and Thermostrat's order (equal values: the first option) would pick Qb. The
+        // chance that Right finds the win is 1 after Qb (one reply, and it is the obvious one) but
+        // ½·1/3 + ½·1 = 2/3 after Qa: perfect moves to Qa.
+        var trees = new Trees();
+        var qb = trees.Node([], [trees.Zero()]);
+        var qa = trees.Node([], [trees.Zero(), trees.Integer(1), trees.Integer(1)]);
+        var s = trees.Node([qb, qa], []);
+        var position = trees.Sum(s);
+        var brute = new BruteForce();
+        Assert.False(brute.Wins(position, Side.Left));
+        Assert.Equal(1, brute.WinningMoves(position.Play(Side.Left, new Move(s.Id, 1)), Side.Right));
+        Assert.Equal(1, brute.WinningMoves(position.Play(Side.Left, new Move(s.Id, 2)), Side.Right));
+        var d = new PerfectPlayer().Choose(position, Side.Left, Plenty);
+        Assert.True(d.Exact);
+        Assert.False(d.Winning);
+        Assert.Equal(new Move(s.Id, 2), d.Move);
+    }
+
+    [Fact]
+    public void AtEqualChancesPerfectKeepsTheMarginSmallest()
+    {
+        // Worked by hand: S = { -2, -1 | } = {-1 |} = 0 (the -2 is dominated), a loss for Left moving
+        // first. Right has one reply either way and it wins (from -1 to 0; from -2 to -1, where Left
+        // has no move), so the chances are equal (1); the margin decides: the mean left is -1
+        // after the move to -1 and -2 after the move to -2. Perfect moves to -1.
+        var trees = new Trees();
+        var s = trees.Node([trees.Integer(-2), trees.Integer(-1)], []);
+        var d = new PerfectPlayer().Choose(trees.Sum(s), Side.Left, Plenty);
+        Assert.False(d.Winning);
+        Assert.Equal(new Move(s.Id, 2), d.Move);
     }
 
     [Fact]

@@ -177,4 +177,22 @@ public sealed class EditAndReplayInBrowserTests(BrowserFixture browser)
             Assert.True(await page.Locator("#replay-board svg").CountAsync() == 1 || ply == n);
         }
     }
+
+    [Fact]
+    public async Task AReportsLinkOpensItsGameAtTheBlunder()
+    {
+        // The link `bramble match report` writes (ReplayLink): the game's journal line in the fragment.
+        var (_, game) = Journal();
+        var blunder = game.Blunders[0];
+        var page = await browser.OpenAsync();
+        await page.GotoAsync(ReplayLink.For(browser.Address, game, blunder.Ply));
+        await page.WaitForSelectorAsync("#replay-plies li.current");
+        Assert.False(await page.Locator("#view-replay").IsHiddenAsync());
+        Assert.Equal(game.Moves.Count + 1, await page.Locator("#replay-plies li").CountAsync());
+        Assert.Equal($"ply {blunder.Ply} of {game.Moves.Count}", await page.TextContentAsync("#replay-where"));
+        var status = (await page.TextContentAsync("#replay-status"))!;
+        Assert.Contains($"played {game.Moves[blunder.Ply - 1].Move}", status);
+        Assert.Contains("blunder", status);
+        Assert.Contains("1 game in the link", await page.TextContentAsync("#replay-notice"));
+    }
 }

@@ -6,6 +6,7 @@ using Bramble.Arena.Spec;
 using Bramble.Arena.Standings;
 using Bramble.Arena.Statistics;
 using Bramble.Values;
+using Bramble.Web;
 
 namespace Bramble.Cli.Report;
 
@@ -19,7 +20,8 @@ public static class ReportPage
 {
     private static readonly CultureInfo s_c = CultureInfo.InvariantCulture;
 
-    public static string Render(string title, IReadOnlyList<GameRecord> records, SprtSpec? sprt, IReadOnlyList<string>? playerOrder = null)
+    /// <param name="board">The browser board's address for the replay links (<see cref="ReplayLink.DefaultBoard"/> when null).</param>
+    public static string Render(string title, IReadOnlyList<GameRecord> records, SprtSpec? sprt, IReadOnlyList<string>? playerOrder = null, string? board = null)
     {
         var ordered = records.OrderBy(r => r.Game).ToList();
         var standings = MatchStandings.Compute(ordered, playerOrder, sprt);
@@ -33,8 +35,9 @@ public static class ReportPage
         Cross(html, standings.Crosstable);
         if (standings.Sprt is { } result) SprtPlot(html, ordered, result);
         Positions(html, PositionSummary.Compute(ordered), standings.Players.Select(p => p.Id).ToList());
-        Blunders(html, ordered);
-        Games(html, ordered);
+        board ??= ReplayLink.DefaultBoard;
+        Blunders(html, ordered, board);
+        Games(html, ordered, board);
         html.Append("</body>\n</html>\n");
         return html.ToString();
     }
@@ -161,28 +164,30 @@ public static class ReportPage
         html.Append("</table>\n");
     }
 
-    private static void Blunders(StringBuilder html, IReadOnlyList<GameRecord> records)
+    private static void Blunders(StringBuilder html, IReadOnlyList<GameRecord> records, string board)
     {
         var list = records.SelectMany(r => r.Blunders.Select(b => (Record: r, Blunder: b))).ToList();
-        html.Append(Fmt($"<h2>Blunders ({list.Count})</h2>\n<p class=\"note\">A move from a position its player could win to one it cannot, by exact analysis.</p>\n"));
+        html.Append(Fmt($"<h2>Blunders ({list.Count})</h2>\n<p class=\"note\">A move from a position its player could win to one it cannot, by exact analysis. <b>board</b> opens the game at that ply on the browser board, when it runs at {E(board)} (<code>bramble serve</code>).</p>\n"));
         if (list.Count == 0) return;
-        html.Append("<table id=\"blunders\">\n<tr><th>game</th><th>by</th><th>ply</th><th>move</th><th class=\"text\">position</th></tr>\n");
+        html.Append("<table id=\"blunders\">\n<tr><th>game</th><th>by</th><th>ply</th><th>move</th><th class=\"text\">position</th><th>replay</th></tr>\n");
         foreach (var (r, b) in list)
         {
             var move = b.Ply >= 1 && b.Ply <= r.Moves.Count ? r.Moves[b.Ply - 1].Move : "?";
-            html.Append(Fmt($"<tr data-game=\"{r.Game}\" data-by=\"{E(b.By)}\" data-ply=\"{b.Ply}\"><td><a href=\"#game-{r.Game}\">{r.Game}</a></td><td>{E(b.By)}</td><td>{b.Ply}</td><td>{E(move)}</td><td class=\"text\">{E(r.Ruleset)}: {E(r.Position)}</td></tr>\n"));
+            var link = ReplayLink.For(board, r, b.Ply);
+            html.Append(Fmt($"<tr data-game=\"{r.Game}\" data-by=\"{E(b.By)}\" data-ply=\"{b.Ply}\"><td><a href=\"#game-{r.Game}\">{r.Game}</a></td><td>{E(b.By)}</td><td>{b.Ply}</td><td>{E(move)}</td><td class=\"text\">{E(r.Ruleset)}: {E(r.Position)}</td><td><a class=\"replay\" href=\"{E(link)}\">board</a></td></tr>\n"));
         }
         html.Append("</table>\n");
     }
 
-    private static void Games(StringBuilder html, IReadOnlyList<GameRecord> records)
+    private static void Games(StringBuilder html, IReadOnlyList<GameRecord> records, string board)
     {
-        html.Append("<h2>Games</h2>\n<p class=\"note\">Each game with its moves, to replay them: on the browser board (<code>bramble serve</code>, then open http://127.0.0.1:&lt;port&gt;) set up the position and play the moves in order, or in the terminal with <code>bramble play</code>.</p>\n<div id=\"games\">\n");
+        html.Append(Fmt($"<h2>Games</h2>\n<p class=\"note\">Each game with its moves. <b>Replay on the board</b> opens it on the browser board, when it runs at {E(board)} (<code>bramble serve</code>; another address: <code>match report --board URL</code>); in the terminal, <code>bramble play</code> takes the position and the moves can be played in order.</p>\n<div id=\"games\">\n"));
         foreach (var r in records)
         {
             var moves = string.Join(" ", r.Moves.Select(m => $"{(m.Side == Side.Left ? "L" : "R")}:{m.Move}"));
             html.Append(Fmt($"<details id=\"game-{r.Game}\" data-game=\"{r.Game}\" data-winner=\"{E(r.WinnerId)}\" data-moves=\"{r.Moves.Count}\"><summary>game {r.Game}: {E(r.Left)} (Left) against {E(r.Right)} (Right), {r.First.Word()} first — {E(r.WinnerId)} won ({r.End.Word()})</summary>"));
             html.Append(Fmt($"<p><code>{E(r.Ruleset)}: {E(r.Position)}</code></p><p class=\"moves\"><code>{E(moves)}</code></p>"));
+            html.Append(Fmt($"<p><a class=\"replay\" href=\"{E(ReplayLink.For(board, r))}\">Replay on the board</a></p>"));
             if (r.Detail is { } detail) html.Append("<p class=\"note\">").Append(E(detail)).Append("</p>");
             html.Append("</details>\n");
         }

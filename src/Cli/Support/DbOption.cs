@@ -14,7 +14,7 @@ namespace Bramble.Cli;
 /// </summary>
 public static class DbOption
 {
-    public static readonly Option<FileInfo?> Option = new("--db") { Description = "Component-value database file to read, and to extend (created if missing; docs/database.md)" };
+    public static readonly Option<FileInfo?> Option = new("--db") { Description = "Component-value database file to read, and to extend (created if missing; docs/database.md)", HelpName = "FILE" };
 
     /// <summary>Reads the database into the memo; false (after a warning on stderr) when it could not be read.</summary>
     public static bool Load(FileInfo? file, ValueContext context)

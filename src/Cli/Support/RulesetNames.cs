@@ -1,4 +1,5 @@
 using Bramble.Rules;
+using Bramble.Rules.Database;
 
 namespace Bramble.Cli;
 
@@ -9,4 +10,9 @@ namespace Bramble.Cli;
 public static class RulesetNames
 {
     public static string Listed => string.Join(", ", Rulesets.All.Select(r => r.Name));
+
+    /// <summary>Each ruleset with its generators: "hackenbush: stalks, trees; domineering: …".</summary>
+    public static string Generators => string.Join("; ", Rulesets.All.Select(r => $"{r.Name}: {string.Join(", ", r.Generators)}"));
+
+    /// <summary>The rulesets a database can be built for, each with what its size counts: "domineering (cells), …".</summary>
 }

@@ -19,9 +19,9 @@ public static class ComposeVerb
     {
         var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
         var value = new Argument<string>("value") { Description = "the target value in value notation (↑, *2, 3/8, {1|-1}, ...), @file, or - for stdin" };
-        var maxSize = new Option<int?>("--max-size") { Description = "Look at positions up to this size (edges, cells, terms)" };
-        var count = new Option<int>("--count") { Description = "How many positions to find", DefaultValueFactory = _ => 1 };
-        var budget = new Option<long>("--budget-ms") { Description = "Stop searching after this many milliseconds", DefaultValueFactory = _ => DefaultBudgetMs };
+        var maxSize = new Option<int?>("--max-size") { Description = "Look at positions up to this size (edges, cells, terms)", HelpName = "N" };
+        var count = new Option<int>("--count") { Description = "How many positions to find", DefaultValueFactory = _ => 1, HelpName = "N" };
+        var budget = new Option<long>("--budget-ms") { Description = "Stop searching after this many milliseconds", DefaultValueFactory = _ => DefaultBudgetMs, HelpName = "N" };
         var json = new Option<bool>("--json") { Description = "Print the result as JSON" };
         var command = new Command("compose", "Positions of a ruleset whose value is the given one, smallest first") { ruleset, value, maxSize, count, budget, json };
         command.Options.Add(DbOption.Option);

@@ -8,7 +8,7 @@ using Serilog;
 namespace Bramble.Cli;
 
 /// <summary>
-/// <c>bramble db build &lt;ruleset&gt; --size N --out FILE</c> and <c>bramble db info FILE</c>:
+/// <c>bramble db build &lt;ruleset&gt; --cells N --out FILE</c> and <c>bramble db info FILE</c>:
 /// precompute a component-value database, and say what one holds (docs/database.md).
 /// </summary>
 public static class DbVerb
@@ -23,15 +23,15 @@ public static class DbVerb
 
     private static Command BuildCommand()
     {
-        var ruleset = new Argument<string>("ruleset") { Description = "domineering (regions up to N cells) or hackenbush (pieces up to N edges)" };
-        var size = new Option<int?>("--size") { Description = "Largest component size to precompute: cells for domineering, edges for hackenbush" };
-        // The first spelling, kept working for scripts but not shown: it read wrong for edges.
-        var cells = new Option<int?>("--cells") { Description = "Old spelling of --size", Hidden = true };
-        var output = new Option<FileInfo>("--out") { Description = "Database file to write (merged with it when it already is one)", Required = true };
-        var command = new Command("build", "Precompute the values of every component up to a size") { ruleset, size, cells, output };
+        var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + ComponentCatalogues.Describe() };
+        var cells = new Option<int?>("--cells") { Description = "Largest component to precompute, in the ruleset's unit (listed under <ruleset>)", HelpName = "N" };
+        // Another spelling, kept working for scripts but not shown.
+        var size = new Option<int?>("--size") { Description = "Same as --cells", Hidden = true };
+        var output = new Option<FileInfo>("--out") { Description = "Database file to write (merged with it when it already is one)", Required = true, HelpName = "FILE" };
+        var command = new Command("build", "Precompute the values of every component up to size N (cells, squares or stones: the ruleset's unit)") { ruleset, cells, size, output };
         command.SetAction(parse => Failures.Guard(() =>
         {
-            int n = parse.GetValue(size) ?? parse.GetValue(cells) ?? throw new InputException("db build: --size N is required (cells for domineering, edges for hackenbush)");
+            int n = parse.GetValue(cells) ?? parse.GetValue(size) ?? throw new InputException("db build: --cells N is required (the largest component, in the ruleset's unit: " + ComponentCatalogues.Describe() + ")");
             return RunBuild(parse.GetValue(ruleset)!, n, parse.GetValue(output)!);
         }));
         return command;
@@ -60,7 +60,7 @@ public static class DbVerb
         }
         if (size < 1 || size > catalogue.MaxCatalogueSize)
         {
-            Console.Error.WriteLine($"error: --size must be between 1 and {catalogue.MaxCatalogueSize} for {ruleset.Name}, not {size}");
+            Console.Error.WriteLine($"error: --cells must be between 1 and {catalogue.MaxCatalogueSize} for {ruleset.Name}, not {size}");
             return Entry.BadInput;
         }
 

@@ -15,7 +15,7 @@ public static class DrawVerb
     {
         var what = new Argument<string>("ruleset") { Description = RulesetNames.Listed + ", or thermograph" };
         var position = new Argument<string>("position") { Description = "position text (or a value for thermograph), @file, or -" };
-        var output = new Option<string>("--out") { Description = "SVG file to write, or - for stdout", Required = true };
+        var output = new Option<string>("--out") { Description = "SVG file to write, or - for stdout", Required = true, HelpName = "FILE" };
         var command = new Command("draw", "Draw a position or a thermograph as SVG") { what, position, output };
         command.SetAction(parse => Failures.Guard(() =>
         {

@@ -15,12 +15,12 @@ public static class EngineVerb
 {
     public static Command Build()
     {
-        var strategy = new Option<string?>("--strategy") { Description = $"Player to serve: {string.Join(", ", Players.Names)} (default: the strongest available)" };
+        var strategy = new Option<string?>("--strategy") { Description = $"Player to serve: {string.Join(", ", Players.Names)} (default: the strongest available)", HelpName = "S" };
         // Numbers are read as text and checked here; unknown words are reported by Entry on
         // stderr (never on stdout, which belongs to the protocol in this verb).
-        var budget = new Option<string?>("--budget-ms") { Description = $"Thinking budget per move when think gives no clock, and the cap when it does (default {EngineSettings.DefaultBudgetMs})" };
-        var seed = new Option<string?>("--seed") { Description = "Seed for players that use chance (default 1)" };
-        var nodes = new Option<string?>("--nodes") { Description = "Limit each move by work, at most N nodes, rather than by time: the same game gives the same moves on any machine (see docs/matches.md)" };
+        var budget = new Option<string?>("--budget-ms") { Description = $"Thinking budget per move when think gives no clock, and the cap when it does (default {EngineSettings.DefaultBudgetMs})", HelpName = "N" };
+        var seed = new Option<string?>("--seed") { Description = "Seed for players that use chance (default 1)", HelpName = "X" };
+        var nodes = new Option<string?>("--nodes") { Description = "Limit each move by work, at most N nodes, rather than by time: the same game gives the same moves on any machine (see docs/matches.md)", HelpName = "N" };
         var command = new Command("engine", "Serve the twine/1 protocol on stdin and stdout (see docs/protocol.md)") { strategy, budget, seed, nodes };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>

@@ -12,11 +12,11 @@ public static class GenerateVerb
     public static Command Build()
     {
         var ruleset = new Argument<string>("ruleset") { Description = "the ruleset: " + RulesetNames.Listed };
-        var generator = new Argument<string>("generator") { Description = "hackenbush: stalks, trees, graphs, mixed; domineering: rectangles, regions, sums; forms: switches, hot, hot-extra, mixed" };
-        var count = new Option<int>("--count") { Description = "how many positions", DefaultValueFactory = _ => 1 };
-        var size = new Option<int>("--size") { Description = "size of each position (edges, cells or terms; see docs/)", DefaultValueFactory = _ => 8 };
-        var seed = new Option<int>("--seed") { Description = "seed: the same seed gives the same positions", DefaultValueFactory = _ => 1 };
-        var colours = new Option<string?>("--colours") { Description = "Hackenbush: the edge colours to draw from, e.g. BR or G (default BRG)" };
+        var generator = new Argument<string>("generator") { Description = "the generator, by ruleset: " + RulesetNames.Generators };
+        var count = new Option<int>("--count") { Description = "how many positions", DefaultValueFactory = _ => 1, HelpName = "N" };
+        var size = new Option<int>("--size") { Description = "size of each position (edges, cells or terms; see docs/)", DefaultValueFactory = _ => 8, HelpName = "S" };
+        var seed = new Option<int>("--seed") { Description = "seed: the same seed gives the same positions", DefaultValueFactory = _ => 1, HelpName = "X" };
+        var colours = new Option<string?>("--colours") { Description = "Hackenbush: the edge colours to draw from, e.g. BR or G (default BRG)", HelpName = "COLOURS" };
         var command = new Command("generate", "Reproducible random positions, one per line") { ruleset, generator, count, size, seed, colours };
         command.SetAction(parse => Failures.Guard(() =>
         {

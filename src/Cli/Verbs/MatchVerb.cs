@@ -22,10 +22,10 @@ public static class MatchVerb
 
     public static Command Build()
     {
-        var spec = new Argument<string?>("spec") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
+        var spec = new Argument<string?>("spec.json") { Description = "Match specification (JSON); none: the built-in demo", Arity = ArgumentArity.ZeroOrOne };
         var resume = new Option<bool>("--resume") { Description = "Continue the journal, skipping the games it holds" };
         var shard = new Option<string?>("--shard") { Description = "K/N: play only the games whose id ≡ K (mod N), into a journal of their own (e.g. 0/4)", HelpName = "K/N" };
-        var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)" };
+        var parallel = new Option<int?>("--parallel") { Description = "Games at once (default: the spec's, else the number of cores)", HelpName = "N" };
         var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
         var createFolders = new Option<bool>("--create-folders") { Description = "Let the match make its journal's folder even outside the match file's folder" };
         var command = new Command("match", "Play a tournament between engines and print the standings (a match file runs the programs it names)")
@@ -42,9 +42,9 @@ public static class MatchVerb
 
     private static Command BuildMerge()
     {
-        var journals = new Argument<string[]>("journals") { Description = "Journals to merge (e.g. the shards of one match)", Arity = ArgumentArity.OneOrMore };
+        var journals = new Argument<string[]>("journal") { Description = "Journals to merge (e.g. the shards of one match)", Arity = ArgumentArity.OneOrMore };
         var json = new Option<bool>("--json") { Description = "Print the standings as JSON" };
-        var output = new Option<string?>("--out") { Description = "Also write the merged journal to this file" };
+        var output = new Option<string?>("--out") { Description = "Also write the merged journal to this file", HelpName = "FILE" };
         var command = new Command("merge", "Merge shard journals and print the standings") { journals, json, output };
         command.SetAction(parse => Merge(parse.GetValue(journals) ?? [], parse.GetValue(json), parse.GetValue(output)));
         return command;
@@ -174,19 +174,25 @@ public static class MatchVerb
 
     private static Command BuildReport()
     {
-        var journals = new Argument<string[]>("journals") { Description = "Journals of one match (e.g. its shards)", Arity = ArgumentArity.OneOrMore };
-        var output = new Option<string>("--out") { Description = "The HTML file to write", Required = true };
-        var specFile = new Option<string?>("--spec") { Description = "The match file: its title, player order and SPRT (the journal does not carry them)" };
+        var journals = new Argument<string[]>("journal") { Description = "Journals of one match (e.g. its shards)", Arity = ArgumentArity.OneOrMore };
+        var output = new Option<string>("--out") { Description = "The HTML file to write", Required = true, HelpName = "FILE" };
+        var specFile = new Option<string?>("--spec") { Description = "The match file: its title, player order and SPRT (the journal does not carry them)", HelpName = "FILE" };
+        var board = new Option<string?>("--board") { Description = $"The browser board's address, for the links that replay each game there (default {Bramble.Web.ReplayLink.DefaultBoard}: bramble serve on this computer)", HelpName = "URL" };
         var command = new Command("report", "Write one self-contained HTML page about a match: standings, ratings, crosstable, SPRT, positions, blunders, games")
         {
-            journals, output, specFile,
+            journals, output, specFile, board,
         };
-        command.SetAction(parse => WriteReport(parse.GetValue(journals) ?? [], parse.GetValue(output)!, parse.GetValue(specFile)));
+        command.SetAction(parse => WriteReport(parse.GetValue(journals) ?? [], parse.GetValue(output)!, parse.GetValue(specFile), parse.GetValue(board)));
         return command;
     }
 
-    private static int WriteReport(string[] journals, string output, string? specPath)
+    private static int WriteReport(string[] journals, string output, string? specPath, string? board)
     {
+        if (board is not null && !(Uri.TryCreate(board, UriKind.Absolute, out var address) && (address.Scheme == Uri.UriSchemeHttp || address.Scheme == Uri.UriSchemeHttps)))
+        {
+            Console.Error.WriteLine($"match report: --board {board}: give the board's address as http://HOST:PORT/");
+            return Entry.BadInput;
+        }
         if (ReadAndMerge(journals, "match report") is not var (records, _)) return Entry.BadInput;
         MatchSpec? spec = null;
         if (specPath is not null)
@@ -202,7 +208,7 @@ public static class MatchVerb
             }
         }
         var title = spec?.Title ?? $"Match report: {string.Join(", ", journals.Select(Path.GetFileName))}";
-        var page = ReportPage.Render(title, records, spec?.Sprt, spec?.Players.Select(p => p.Id).ToList());
+        var page = ReportPage.Render(title, records, spec?.Sprt, spec?.Players.Select(p => p.Id).ToList(), board);
         try
         {
             File.WriteAllText(output, page);

@@ -27,12 +27,12 @@ public static class PlayVerb
             Description = "start position in the ruleset's notation (BRB + G(B,R); ..#./....; {3|-1} + *), @file, or - for stdin; default: one from the demo suite",
             Arity = ArgumentArity.ZeroOrOne,
         };
-        var asSide = new Option<string>("--as") { Description = "the side you play: left or right", DefaultValueFactory = _ => "left" };
-        var first = new Option<string>("--first") { Description = "who moves first: left or right", DefaultValueFactory = _ => "left" };
-        var level = new Option<string?>("--level") { Description = "how well the engine plays: " + PlayLevels.Describe() + " (default perfect)" };
-        var strategy = new Option<string?>("--strategy") { Description = "the engine's strategy by name, instead of --level: " + string.Join(", ", Players.Names) };
-        var budget = new Option<int>("--budget-ms") { Description = "the engine's thinking time per move (also the budget of hint and value)", DefaultValueFactory = _ => 2000 };
-        var seed = new Option<int>("--seed") { Description = "seed for random choices", DefaultValueFactory = _ => 1 };
+        var asSide = new Option<string>("--as") { Description = "the side you play: left or right", DefaultValueFactory = _ => "left", HelpName = "left|right" };
+        var first = new Option<string>("--first") { Description = "who moves first: left or right", DefaultValueFactory = _ => "left", HelpName = "left|right" };
+        var level = new Option<string?>("--level") { Description = "how well the engine plays: " + PlayLevels.Describe() + " (default perfect)", HelpName = "LEVEL" };
+        var strategy = new Option<string?>("--strategy") { Description = "the engine's strategy by name, instead of --level: " + string.Join(", ", Players.Names), HelpName = "S" };
+        var budget = new Option<int>("--budget-ms") { Description = "the engine's thinking time per move (also the budget of hint and value)", DefaultValueFactory = _ => 2000, HelpName = "N" };
+        var seed = new Option<int>("--seed") { Description = "seed for random choices", DefaultValueFactory = _ => 1, HelpName = "X" };
         var command = new Command("play", "Play a game against the engine in the terminal (commands: moves, hint, value, undo, picture, help, quit)")
             { ruleset, position, asSide, first, level, strategy, budget, seed };
         command.SetAction(parse => Failures.Guard(() =>

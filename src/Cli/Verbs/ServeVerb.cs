@@ -13,9 +13,9 @@ public static class ServeVerb
 {
     public static Command Build()
     {
-        var port = new Option<int>("--port") { Description = "Port to listen on (0: any free port)", DefaultValueFactory = _ => 8421 };
-        var listen = new Option<string>("--listen") { Description = "Address to bind (default 127.0.0.1: this computer only)", DefaultValueFactory = _ => "127.0.0.1" };
-        var engines = new Option<FileInfo?>("--engines") { Description = "JSON file naming engines of your own (twine/1) the page may play against" };
+        var port = new Option<int>("--port") { Description = "Port to listen on (0: any free port)", DefaultValueFactory = _ => Bramble.Web.ReplayLink.DefaultPort, HelpName = "N" };
+        var listen = new Option<string>("--listen") { Description = "Address to bind (default 127.0.0.1: this computer only)", DefaultValueFactory = _ => "127.0.0.1", HelpName = "ADDRESS" };
+        var engines = new Option<FileInfo?>("--engines") { Description = "JSON file naming engines of your own (twine/1) the page may play against", HelpName = "FILE" };
         var command = new Command("serve", "Play, edit, analyse and replay in the browser (a page served by Bramble itself)") { port, listen, engines };
         command.SetAction(parse => Failures.Guard(() =>
         {

@@ -24,10 +24,10 @@ public static class SolveVerb
         first.AcceptOnlyFromAmong("left", "right", "both");
         var strategy = new Option<string>("--strategy") { Description = "perfect (decomposition search) or alphabeta (whole-board search)", DefaultValueFactory = _ => "perfect" };
         strategy.AcceptOnlyFromAmong("perfect", "alphabeta");
-        var budget = new Option<long>("--budget-ms") { Description = "Time budget of each first player's search, in milliseconds", DefaultValueFactory = _ => DefaultBudgetMs };
+        var budget = new Option<long>("--budget-ms") { Description = "Time budget of each first player's search, in milliseconds", DefaultValueFactory = _ => DefaultBudgetMs, HelpName = "N" };
         var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
-        var threads = new Option<int>("--threads") { Description = "Threads of the whole-board search of big Domineering boards", DefaultValueFactory = _ => Math.Min(2, Environment.ProcessorCount) };
-        var table = new Option<FileInfo?>("--table") { Description = "Whole-board table file: read before the solve when it exists, written after it (so an interrupted solve resumes)" };
+        var threads = new Option<int>("--threads") { Description = "Threads of the whole-board search of big Domineering boards", DefaultValueFactory = _ => Math.Min(2, Environment.ProcessorCount), HelpName = "N" };
+        var table = new Option<FileInfo?>("--table") { Description = "Whole-board table file: read before the solve when it exists, written after it (so an interrupted solve resumes)", HelpName = "FILE" };
         var progress = new Option<bool>("--progress") { Description = "Report nodes, nodes per second and the root move being searched on stderr every few seconds" };
         var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json, threads, table, progress };
         command.Options.Add(DbOption.Option);

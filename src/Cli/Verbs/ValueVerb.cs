@@ -15,7 +15,7 @@ public static class ValueVerb
         var position = new Argument<string>("position") { Description = "position text, @file (read whole), or - for stdin" };
         var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
         var ascii = new Option<bool>("--ascii") { Description = "Print only ASCII: up, down, +-x and words instead of the symbols" };
-        var budget = new Option<long?>("--budget-ms") { Description = "Give up after this many milliseconds and say the value is not exact within the budget (default: no limit)" };
+        var budget = new Option<long?>("--budget-ms") { Description = "Give up after this many milliseconds and say the value is not exact within the budget (default: no limit)", HelpName = "N" };
         var command = new Command("value", "Exact canonical value of a position and of each component") { ruleset, position, json, ascii, budget };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>

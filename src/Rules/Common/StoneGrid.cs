@@ -167,40 +167,45 @@ public sealed class StoneGrid
     /// </summary>
     public string SignedKey(int top, int left, int height, int width)
     {
-        string? best = null;
+        // Each image is written into a buffer and compared there; only the winner becomes a string
+        // (this runs for every position searched).
+        int longest = height * width + Math.Max(height, width);
+        Span<char> image = longest <= 512 ? stackalloc char[longest] : new char[longest];
+        Span<char> best = longest <= 512 ? stackalloc char[longest] : new char[longest];
+        int bestLength = -1;
         bool bestSwapped = false;
-        var sb = new StringBuilder(height * (width + 1));
         for (int t = 0; t < 8; t++)
         {
             bool transposed = t >= 4;
             int h = transposed ? width : height, w = transposed ? height : width;
             for (int swap = 0; swap < 2; swap++)
             {
-                sb.Clear();
+                int n = 0;
                 for (int r = 0; r < h; r++)
                 {
-                    if (r > 0) sb.Append('/');
+                    if (r > 0) image[n++] = '/';
                     for (int c = 0; c < w; c++)
                     {
                         // Image cell (r, c) reads source cell (sr, sc) after the optional transpose and flips.
                         int sr = transposed ? c : r, sc = transposed ? r : c;
                         if ((t & 1) != 0) sr = height - 1 - sr;
                         if ((t & 2) != 0) sc = width - 1 - sc;
-                        var s = At(top + sr, left + sc);
-                        if (swap == 1) s = Opponent(s);
-                        sb.Append(Letter(s));
+                        var stone = At(top + sr, left + sc);
+                        if (swap == 1) stone = Opponent(stone);
+                        image[n++] = Letter(stone);
                     }
                 }
-                string text = sb.ToString();
-                int cmp = best is null ? -1 : string.CompareOrdinal(text, best);
+                int cmp = bestLength < 0 ? -1 : ((ReadOnlySpan<char>)image[..n]).SequenceCompareTo(best[..bestLength]);
                 if (cmp < 0 || (cmp == 0 && bestSwapped && swap == 0))
                 {
-                    best = text;
+                    image[..n].CopyTo(best);
+                    bestLength = n;
                     bestSwapped = swap == 1;
                 }
             }
         }
-        return bestSwapped ? "-" + best : best!;
+        string text = new(best[..bestLength]);
+        return bestSwapped ? "-" + text : text;
     }
 
     public override string ToString() => Text;

@@ -32,6 +32,7 @@ public sealed record DatabaseSummary(
         foreach (var group in contents.Entries.GroupBy(e => e.Key[..e.Key.IndexOf(':')]).OrderBy(g => g.Key, StringComparer.Ordinal))
         {
             var ruleset = Bramble.Rules.Rulesets.Find(group.Key);
+            var catalogue = ruleset as IComponentCatalogue;
             var bySize = new SortedDictionary<int, int>();
             int numbers = 0, nimbers = 0, others = 0;
             foreach (var (key, game) in group)
@@ -43,14 +44,15 @@ public sealed record DatabaseSummary(
                 if (ruleset is null) continue;
                 try
                 {
-                    int size = ruleset.Parse(key[(group.Key.Length + 1)..].TrimStart('-')).Size;
+                    var component = ruleset.Parse(key[(group.Key.Length + 1)..].TrimStart('-'));
+                    int size = catalogue?.CatalogueSize(component) ?? component.Size;
                     bySize[size] = bySize.GetValueOrDefault(size) + 1;
                 }
                 catch (PositionSyntaxException)
                 {
                 }
             }
-            string unit = (ruleset as IComponentCatalogue)?.SizeUnit ?? "size";
+            string unit = catalogue?.SizeUnit ?? "size";
             parts.Add(new RulesetSummary(group.Key, group.Count(), group.Select(e => e.Value).Distinct().Count(), numbers, nimbers, others, bySize, unit));
         }
         return new DatabaseSummary(path, contents.Version, contents.Description, contents.FileBytes, contents.GameNodes, contents.Entries.Count, parts);

@@ -2,8 +2,9 @@ namespace Bramble.Rules.Database;
 
 /// <summary>
 /// A ruleset whose components up to a given size can be listed one by one (every Domineering
-/// region of up to N cells, every Hackenbush piece of up to N edges), so <c>bramble db build</c>
-/// can precompute their values into a database file.
+/// region of up to N cells, every Hackenbush piece of up to N edges, every Clobber group of up to
+/// N stones, ...), so <c>bramble db build</c> can precompute their values into a database file.
+/// The verb knows no ruleset: implementing this interface is all a ruleset does to be listed.
 /// </summary>
 public interface IComponentCatalogue
 {
@@ -18,4 +19,11 @@ public interface IComponentCatalogue
     /// the smallest up to <paramref name="size"/>, smaller ones first.
     /// </summary>
     IEnumerable<IPosition> ComponentsUpTo(int size);
+
+    /// <summary>
+    /// The size of a component in the measure <see cref="ComponentsUpTo"/> counts (what
+    /// <c>bramble db info</c> groups entries by); the position's own <see cref="IPosition.Size"/>
+    /// unless the catalogue counts something else (Konane lists rectangles by their squares).
+    /// </summary>
+    int CatalogueSize(IPosition component) => component.Size;
 }

@@ -7,7 +7,7 @@ namespace Bramble.Rules.Hackenbush;
 /// the fastest method that applies to each part (<see cref="PieceEvaluator"/>), generators of
 /// random positions.
 /// </summary>
-public sealed class HackenbushRuleset : IRuleset, IComposable
+public sealed class HackenbushRuleset : IRuleset, IComposable, Database.IComponentCatalogue
 {
     /// <summary>Pieces larger than this are valued on a big stack: the store's canonical forms recurse.</summary>
     private const int DeepWorkEdges = 400;
@@ -64,6 +64,13 @@ public sealed class HackenbushRuleset : IRuleset, IComposable
     public int DefaultSearchSize => 6;
 
     public IEnumerable<IPosition> ComponentsOfSize(int size) => PieceCatalogue.OfSize(this, size);
+
+    // ------------------------------------------------------------------ IComponentCatalogue (bramble db build)
+
+    public int MaxCatalogueSize => PieceCatalogue.Limit;
+
+    /// <summary>Every piece of 1 to <paramref name="size"/> edges, one of each kind (the list <c>compose</c> walks), smaller first.</summary>
+    public IEnumerable<IPosition> ComponentsUpTo(int size) => Enumerable.Range(1, size).SelectMany(ComponentsOfSize);
 
     public IPosition SumOf(IReadOnlyList<IPosition> components) =>
         ParsePosition(components.Count == 0 ? "0" : string.Join(" + ", components.Select(c => c.Text)));

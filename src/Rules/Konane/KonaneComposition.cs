@@ -5,9 +5,9 @@ namespace Bramble.Rules.Konane;
 
 /// <summary>
 /// What <c>bramble compose</c> needs from Konane. A component is a group of n stones standing on
-/// an open board: its stones fill a rectangle, and n − 1 empty squares surround it on every side,
-/// so no edge of the board is within the group's reach (a group of n stones never reaches further
-/// than n − 1 squares, see <see cref="KonanePosition.Clusters"/>). Listed are the groups whose
+/// an open board: its stones fill a rectangle, and ⌊n/2⌋ empty squares surround it on every side,
+/// so no edge of the board is within the group's reach (no stone of a group of n stones ever
+/// leaves its bounding box widened by ⌊n/2⌋, see <see cref="KonanePosition.Clusters"/>). Listed are the groups whose
 /// stones fit a rectangle of at most <see cref="LargestBox"/> squares and at most twice as many
 /// squares as stones; a position that needs a board's edge or a sparser group is not looked at.
 /// Each move removes at least one stone, so a value of birthday b needs b + 1 stones.
@@ -27,7 +27,7 @@ internal static class KonaneComposition
             {
                 if (area % rows != 0) continue;
                 int columns = area / rows;
-                int margin = stones - 1;
+                int margin = KonanePosition.Reach(stones);
                 if (columns + 2 * margin > StoneGrid.MaxColumns) continue;
                 foreach (var filling in Fillings(area, stones))
                 {
@@ -67,8 +67,8 @@ internal static class KonaneComposition
 
     /// <summary>
     /// The groups side by side with one more empty column or row between them: each stands in
-    /// its own margin, so two groups of a and b stones end up more than a + b − 1 squares apart,
-    /// too far to ever meet.
+    /// its own margin, so the empty lines between the boxes of two groups of a and b stones
+    /// number more than ⌊a/2⌋ + ⌊b/2⌋, and no stone of one ever comes next to the other.
     /// </summary>
     public static IPosition SumOf(KonaneRuleset ruleset, IReadOnlyList<IPosition> components) => components.Count == 1
         ? components[0]

@@ -69,21 +69,54 @@ public sealed class KonanePosition : StonePosition
     }
 
     /// <summary>
-    /// Groups of stones that no sequence of moves can bring together. A move lands next to the
-    /// stone it jumped and removes at least one stone, so a group of n stones never reaches
-    /// further than n − 1 squares (Manhattan distance) from where its stones stand, and it makes
-    /// at most n − 1 moves. Two groups of a and b stones interact only if they come within one
-    /// square, so groups further apart than a + b − 1 are independent. Starting from single
-    /// stones, groups closer than that are merged until none are; groups where nobody can move
-    /// are dropped (nothing can ever reach them).
+    /// Groups of stones that no sequence of moves can bring together, found with two reach bounds
+    /// for a group of n stones left to itself (both proved in docs/konane.md):
+    /// <list type="bullet">
+    /// <item>every jump lands next to the square of the stone it removes and there are at most
+    /// n − 1 jumps, so every stone stays within n − 1 squares (Manhattan distance) of a square
+    /// the group held at the start;</item>
+    /// <item>a stone first reaches the d-th column (or row) beyond the group's bounding box only
+    /// after 2d − 1 jumps, so no stone leaves the box widened by ⌊n/2⌋ on each side.</item>
+    /// </list>
+    /// Two groups can only meet (a stone next to the other group's stone, or wanting to land on
+    /// one) if both bounds allow it; starting from single stones, groups that may meet are merged
+    /// until none may, and groups where nobody can move are dropped (nothing can reach them).
     /// </summary>
     internal IReadOnlyList<int[]> Clusters => _clusters ??= FindClusters();
 
+    /// <summary>How far beyond its bounding box a group of <paramref name="stones"/> stones can ever put a stone.</summary>
+    internal static int Reach(int stones) => stones / 2;
+
     private int[][] FindClusters()
     {
-        var clusters = new List<List<int>>();
-        for (int cell = 0; cell < Grid.Rows * Grid.Columns; cell++)
-            if (Grid[cell] != Stone.None) clusters.Add([cell]);
+        // Orthogonal neighbours always may meet, so the merging starts from the connected groups
+        // (the fixpoint is the same from any start finer than it: merging only ever adds).
+        var clusters = new List<Cluster>();
+        int cells = Grid.Rows * Grid.Columns;
+        var owner = new Cluster?[cells];
+        var stack = new Stack<int>();
+        for (int start = 0; start < cells; start++)
+        {
+            if (Grid[start] == Stone.None || owner[start] is not null) continue;
+            var cluster = new Cluster(start, Grid.Columns);
+            owner[start] = cluster;
+            stack.Push(start);
+            while (stack.Count > 0)
+            {
+                int cell = stack.Pop();
+                int r = cell / Grid.Columns, c = cell % Grid.Columns;
+                foreach (var (dr, dc) in Steps)
+                {
+                    if (!Inside(r + dr, c + dc)) continue;
+                    int next = Grid.Index(r + dr, c + dc);
+                    if (Grid[next] == Stone.None || owner[next] is not null) continue;
+                    owner[next] = cluster;
+                    cluster.Add(next, Grid.Columns);
+                    stack.Push(next);
+                }
+            }
+            clusters.Add(cluster);
+        }
         bool merged = true;
         while (merged)
         {
@@ -91,16 +124,59 @@ public sealed class KonanePosition : StonePosition
             for (int a = 0; a < clusters.Count && !merged; a++)
                 for (int b = a + 1; b < clusters.Count && !merged; b++)
                 {
-                    int reach = clusters[a].Count + clusters[b].Count - 1;
-                    if (Distance(clusters[a], clusters[b]) <= reach)
-                    {
-                        clusters[a].AddRange(clusters[b]);
-                        clusters.RemoveAt(b);
-                        merged = true;
-                    }
+                    if (!MayMeet(clusters[a], clusters[b])) continue;
+                    clusters[a].Absorb(clusters[b]);
+                    clusters.RemoveAt(b);
+                    merged = true;
                 }
         }
-        return clusters.Select(c => c.Order().ToArray()).Where(HasMoves).ToArray();
+        return clusters.Select(c => c.Cells.Order().ToArray()).Where(HasMoves).ToArray();
+    }
+
+    private bool MayMeet(Cluster a, Cluster b)
+    {
+        // The box bound: the empty lines between the boxes must be crossed from both sides.
+        int reach = Reach(a.Cells.Count) + Reach(b.Cells.Count);
+        int rowGap = Math.Max(b.Top - a.Bottom, a.Top - b.Bottom) - 1;
+        int columnGap = Math.Max(b.Left - a.Right, a.Left - b.Right) - 1;
+        if (rowGap > reach || columnGap > reach) return false;
+        // The distance bound: stones within a − 1 and b − 1 of their groups, and one square apart.
+        return Distance(a.Cells, b.Cells) <= a.Cells.Count + b.Cells.Count - 1;
+    }
+
+    /// <summary>A group being assembled: its squares and bounding box.</summary>
+    private sealed class Cluster
+    {
+        public Cluster(int cell, int columns)
+        {
+            Cells = [cell];
+            Top = Bottom = cell / columns;
+            Left = Right = cell % columns;
+        }
+
+        public List<int> Cells { get; }
+        public int Top { get; private set; }
+        public int Bottom { get; private set; }
+        public int Left { get; private set; }
+        public int Right { get; private set; }
+
+        public void Add(int cell, int columns)
+        {
+            Cells.Add(cell);
+            Top = Math.Min(Top, cell / columns);
+            Bottom = Math.Max(Bottom, cell / columns);
+            Left = Math.Min(Left, cell % columns);
+            Right = Math.Max(Right, cell % columns);
+        }
+
+        public void Absorb(Cluster other)
+        {
+            Cells.AddRange(other.Cells);
+            Top = Math.Min(Top, other.Top);
+            Bottom = Math.Max(Bottom, other.Bottom);
+            Left = Math.Min(Left, other.Left);
+            Right = Math.Max(Right, other.Right);
+        }
     }
 
     private int Distance(List<int> a, List<int> b)
@@ -133,7 +209,7 @@ public sealed class KonanePosition : StonePosition
 
     /// <summary>
     /// Each group keyed by the part of the board it can ever use: its bounding box widened by
-    /// n − 1 squares on each side, cut off at the board's edges (so an edge the group can reach is
+    /// ⌊n/2⌋ squares on each side (<see cref="Reach"/>), cut off at the board's edges (so an edge the group can reach is
     /// part of the key and one it cannot reach is not), under the eight symmetries of the square
     /// and the exchange of colours (see <see cref="StoneGrid.SignedKey"/>).
     /// </summary>
@@ -142,7 +218,7 @@ public sealed class KonanePosition : StonePosition
     private string KeyOf(int[] cluster)
     {
         var (top, left, bottom, right) = BoundingBox(cluster);
-        int margin = cluster.Length - 1;
+        int margin = Reach(cluster.Length);
         top = Math.Max(0, top - margin);
         left = Math.Max(0, left - margin);
         bottom = Math.Min(Grid.Rows - 1, bottom + margin);

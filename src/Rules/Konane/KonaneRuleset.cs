@@ -64,6 +64,9 @@ public sealed class KonaneRuleset : IRuleset, IComponentCatalogue, IComposable
             }
     }
 
+    /// <summary>A stored key is the part of the board its group can use: counted by its squares, as the list is.</summary>
+    public int CatalogueSize(IPosition component) => component is KonanePosition k ? k.Grid.Rows * k.Grid.Columns : component.Size;
+
     // ------------------------------------------------------------------ IComposable (bramble compose)
 
     // Compose counts stones (a position's size); the database lists boards by squares.

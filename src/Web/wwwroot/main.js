@@ -14,5 +14,5 @@ tabs.forEach(t => t.onclick = () => showView(t.dataset.view));
 const setup = await get('/api/setup');
 const play = new PlayView(setup);
 new EditView(setup, play, showView);
-new ReplayView();
+new ReplayView(showView);
 document.body.dataset.ready = 'true';

@@ -1,6 +1,8 @@
 // The Replay view: a match journal's games, filtered by player, result and blunders; one game
 // stepped through ply by ply with the board drawn, blunders marked in words, and the exact value
-// at each ply where the analysis finished within its budget.
+// at each ply where the analysis finished within its budget. A link whose fragment holds a game
+// (#ply=N&journal=<journal line, percent-encoded>, as `bramble match report` writes them) opens
+// that game at once, at that ply.
 import { Slot, post, isAbort } from './api.js';
 import { show } from './board.js';
 
@@ -11,7 +13,8 @@ const forfeits = new Set(['timeout', 'crash', 'bad-move', 'bad-reply']);
 
 export class ReplayView {
   #slot = new Slot();
-  constructor() {
+  constructor(showView) {
+    this.showView = showView;
     this.games = [];
     this.game = null;
     this.plies = [];
@@ -27,21 +30,43 @@ export class ReplayView {
       if (e.key === 'ArrowLeft') this.go(this.at - 1);
       if (e.key === 'ArrowRight') this.go(this.at + 1);
     });
+    window.addEventListener('hashchange', () => this.fromLink());
+    this.fromLink();
   }
 
   async open(file) {
     if (!file) return;
+    await this.load(await file.text(), file.name);
+  }
+
+  // Reads journal text through the server (the same checks as a file) and lists its games; true when it could.
+  async load(text, name) {
     $('replay-error').textContent = '';
     try {
-      const j = await post('/api/journal', { text: await file.text() });
+      const j = await post('/api/journal', { text });
       this.games = j.games;
-      $('replay-notice').textContent = `${j.games.length} game${j.games.length === 1 ? '' : 's'} in ${file.name}.${j.notice ? ' ' + j.notice : ''}`;
+      $('replay-notice').textContent = `${j.games.length} game${j.games.length === 1 ? '' : 's'} in ${name}.${j.notice ? ' ' + j.notice : ''}`;
       const players = [...new Set(j.games.flatMap(g => [g.left, g.right]))].sort();
       $('replay-player').innerHTML = '<option value="">anyone</option>' + players.map(p => `<option>${esc(p)}</option>`).join('');
       this.list();
+      return true;
     } catch (e) {
       $('replay-error').textContent = e.message;
+      return false;
     }
+  }
+
+  // The game in the address's fragment, if any: shown in the Replay view at the ply the link names.
+  async fromLink() {
+    const params = new URLSearchParams(location.hash.slice(1));
+    const line = params.get('journal');
+    if (line === null) return;
+    this.showView('replay');
+    if (!await this.load(line, 'the link')) return;
+    const game = this.games[0];
+    if (!game) return;
+    const ply = Number(params.get('ply') ?? 0);
+    await this.pick(game, $('replay-games').querySelector(`[data-game="${game.game}"]`), Number.isInteger(ply) ? ply : 0);
   }
 
   list() {
@@ -56,7 +81,7 @@ export class ReplayView {
     $('replay-games').querySelectorAll('[data-game]').forEach(b => b.onclick = () => this.pick(this.games.find(g => String(g.game) === b.dataset.game), b));
   }
 
-  async pick(game, button) {
+  async pick(game, button, ply = 0) {
     this.game = game;
     $('replay-games').querySelectorAll('.current').forEach(b => b.classList.remove('current'));
     button?.classList.add('current');
@@ -71,7 +96,7 @@ export class ReplayView {
         ${blunderAt.has(p.ply) ? ` <span class="mark">✗ blunder by ${esc(blunderAt.get(p.ply))}</span>` : ''}</button></li>`).join('');
       $('replay-plies').querySelectorAll('[data-ply]').forEach(li => li.querySelector('button').onclick = () => this.go(Number(li.dataset.ply)));
       $('replay-stepper').hidden = false;
-      this.go(0);
+      this.go(ply);
     } catch (e) {
       if (!isAbort(e)) $('replay-error').textContent = e.message;
     }

@@ -44,14 +44,9 @@ public class KonaneTests
                 string Patch() => new(Enumerable.Range(0, random.Next(2, 5)).Select(_ => "xo."[random.Next(3)]).ToArray());
                 text = Patch() + new string('.', random.Next(1, 8)) + Patch();
             }
-            var position = _rules.Parse(text);
-            var value = _rules.Value(position, _context);
-            // Common practice: the memoised value equals plain search of the whole board.
-            Assert.True(plain.Value(text) == value, text);
-            var parts = position.Components();
-            if (parts.Count > 1) split++;
-            // Common practice: the groups' values add up to the whole searched as one.
-            Assert.True(_context.Store.Sum(parts.Select(c => plain.Value(c.Text))) == value, text);
+            // Common practice: the memoised value equals plain search of the whole board, and the groups' values add up to it.
+            var (position, value, splits) = plain.Check(_rules, _context, text);
+            if (splits) split++;
             // Derived from the rules: a half turn keeps the game; swapping colours swaps the players.
             string turned = new(text.Reverse().ToArray());
             string swapped = new(text.Select(c => c == 'x' ? 'o' : c == 'o' ? 'x' : c).ToArray());
@@ -64,6 +59,81 @@ public class KonaneTests
             }
         }
         Assert.True(split > 40, $"only {split} boards split");
+    }
+
+    [Fact]
+    public void NoStoneEverLeavesItsGroupsBoxWidenedByHalfItsStones()
+    {
+        // Derived from the rules (the proof is in docs/konane.md): a group of n stones left to itself
+        // never puts a stone more than ⌊n/2⌋ rows or columns beyond its bounding box. Checked here by
+        // walking every sequence of moves of either side (a player may always play elsewhere in a sum),
+        // with the jumps written in the test, on random groups in the middle of a wide empty board.
+        var random = new Random(95);
+        int attained = 0;
+        for (int i = 0; i < 300; i++)
+        {
+            int n = random.Next(2, 8), h = random.Next(1, 4), w = random.Next(1, 4);
+            int margin = n;
+            int rows = h + 2 * margin, columns = w + 2 * margin;
+            var grid = Enumerable.Range(0, rows).Select(_ => new char[columns].Select(_ => '.').ToArray()).ToArray();
+            for (int k = 0; k < n; k++) grid[margin + random.Next(h)][margin + random.Next(w)] = "xo"[random.Next(2)];
+            int stones = grid.Sum(r => r.Count(c => c != '.'));
+            int top = int.MaxValue, bottom = -1, left = int.MaxValue, right = -1;
+            for (int r = 0; r < rows; r++)
+                for (int c = 0; c < columns; c++)
+                    if (grid[r][c] != '.') { top = Math.Min(top, r); bottom = Math.Max(bottom, r); left = Math.Min(left, c); right = Math.Max(right, c); }
+            string start = string.Join("/", grid.Select(r => new string(r)));
+            var seen = new HashSet<string> { start };
+            var queue = new Queue<string>([start]);
+            int farthest = 0;
+            while (queue.Count > 0)
+            {
+                var text = queue.Dequeue();
+                var lines = text.Split('/');
+                for (int r = 0; r < rows; r++)
+                    for (int c = 0; c < columns; c++)
+                        if (lines[r][c] != '.')
+                            farthest = Math.Max(farthest, Math.Max(Math.Max(top - r, r - bottom), Math.Max(left - c, c - right)));
+                foreach (var side in new[] { Side.Left, Side.Right })
+                    foreach (var next in PlainGame.StoneOptions(text, side, konane: true))
+                        if (seen.Add(next)) queue.Enqueue(next);
+            }
+            Assert.True(farthest <= stones / 2, $"{start}: a stone went {farthest} beyond the box with {stones} stones");
+            if (farthest == stones / 2 && farthest > 0) attained++;
+        }
+        // The bound is reached by some groups (so it is not loose by a wide margin).
+        Assert.True(attained > 0);
+    }
+
+    [Fact]
+    public void GroupsNearEachOtherOnBoardsWithEdgesMatchPlainSearch()
+    {
+        // Common practice: the split and the keys, which use the reach bounds, checked against plain search
+        // of the whole board on random two-dimensional boards with groups at every distance from each other and
+        // from the edges.
+        var plain = new PlainGame(_context.Store, (t, s) => PlainGame.StoneOptions(t, s, konane: true));
+        var random = new Random(1993);
+        int split = 0;
+        for (int i = 0; i < 2000; i++)
+        {
+            int h = random.Next(2, 6), w = random.Next(5, 11);
+            var grid = Enumerable.Range(0, h).Select(_ => Enumerable.Repeat('.', w).ToArray()).ToArray();
+            int groups = random.Next(2, 4);
+            for (int g = 0; g < groups; g++)
+            {
+                // A pair of opposing stones side by side (often able to jump), and sometimes a third stone by them.
+                int r0 = random.Next(h), c0 = random.Next(w - 1);
+                bool across = random.Next(2) == 0 || h < 2;
+                if (!across) r0 = random.Next(h - 1);
+                char first = "xo"[random.Next(2)];
+                grid[r0][c0] = first;
+                grid[across ? r0 : r0 + 1][across ? c0 + 1 : c0] = first == 'x' ? 'o' : 'x';
+                if (random.Next(2) == 0)
+                    grid[Math.Clamp(r0 + random.Next(-1, 2), 0, h - 1)][Math.Clamp(c0 + random.Next(-1, 3), 0, w - 1)] = "xo"[random.Next(2)];
+            }
+            if (plain.Check(_rules, _context, string.Join("/", grid.Select(r => new string(r)))).Split) split++;
+        }
+        Assert.True(split > 150, $"only {split} boards split");
     }
 
     [Fact]

@@ -19,6 +19,21 @@ public sealed class PlainGame(GameStore store, Func<string, Side, IEnumerable<st
         return value;
     }
 
+    /// <summary>
+    /// Common practice, the check every ruleset's random test makes: the memoised value of the text
+    /// equals plain search of the whole, and the components' values (plain search of each) add up to
+    /// it. Returns the position and its value, and whether it split into more than one component.
+    /// </summary>
+    public (IPosition Position, Game Value, bool Split) Check(IRuleset rules, ValueContext context, string text)
+    {
+        var position = rules.Parse(text);
+        var value = rules.Value(position, context);
+        Assert.True(Value(text) == value, text);
+        var parts = position.Components();
+        Assert.True(store.Sum(parts.Select(c => Value(c.Text))) == value, text);
+        return (position, value, parts.Count > 1);
+    }
+
     /// <summary>Toads and Frogs on a strip of T, F, '.', '#' (wall): toads step or jump right, frogs left.</summary>
     public static IEnumerable<string> StripOptions(string s, Side side)
     {
