@@ -103,7 +103,7 @@ public partial class HelpConformanceTests
         Assert.DoesNotContain("--size", help);
         // Every ruleset that can list its components is offered, with its unit.
         foreach (var r in Rulesets.All.OfType<IComponentCatalogue>())
-            Assert.Contains($"{((IRuleset)r).Name} ({r.SizeUnit})", help);
+            Assert.Contains($"{((IRuleset)r).Name} (up to N {r.SizeUnit})", help);
         foreach (var spelling in new[] { "--cells", "--size" })
         {
             var path = Path.Combine(Path.GetTempPath(), $"bramble-{Guid.NewGuid():N}.db");
