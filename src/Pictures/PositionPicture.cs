@@ -15,6 +15,7 @@ public static class PositionPicture
         "clobber" => StonePicture.Svg(position, ((Bramble.Rules.Clobber.ClobberPosition)position).Grid, "Clobber"),
         "konane" => StonePicture.Svg(position, ((Bramble.Rules.Konane.KonanePosition)position).Grid, "Konane"),
         "amazons" => AmazonsPicture.Svg((Bramble.Rules.Amazons.AmazonsPosition)position),
+        "snort" or "col" => GraphGamePicture.Svg((Bramble.Rules.GraphGames.ColouringPosition)position),
         _ => throw new ArgumentException($"no picture for ruleset '{position.Ruleset.Name}' yet"),
     };
 }

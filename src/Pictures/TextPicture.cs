@@ -15,6 +15,7 @@ public static class TextPicture
         "konane" => StonePicture.Text(position, ((Bramble.Rules.Konane.KonanePosition)position).Grid,
             "A move jumps a stone over opposing stones into empty squares along a line: c3-c5. Left plays x, Right plays o."),
         "amazons" => AmazonsPicture.Text((Bramble.Rules.Amazons.AmazonsPosition)position),
+        "snort" or "col" => GraphGamePicture.Text((Bramble.Rules.GraphGames.ColouringPosition)position),
         _ => Generic(position),
     };
 

@@ -13,6 +13,8 @@ public static class Rulesets
         new Clobber.ClobberRuleset(),
         new Konane.KonaneRuleset(),
         new Amazons.AmazonsRuleset(),
+        new Snort.SnortRuleset(),
+        new Col.ColRuleset(),
     ];
 
     public static IReadOnlyList<IRuleset> All => s_all;

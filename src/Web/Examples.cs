@@ -20,6 +20,10 @@ public static class Examples
             "click an amazon, the square it goes to, then where its arrow lands (Left plays L, Right R)", "L amazons", "R amazons", "three"),
         ["forms"] = new("forms", "{3|-1} + {5|2||0} + * + 1/2",
             "click an option's line in a term (Left's hang to the left, Right's to the right)", "Left", "Right"),
+        ["snort"] = new("snort", "[1-2-3-4,2-5,6-7-8]",
+            "click an uncoloured vertex to colour it (Left blue, Right red; never next to the other's colour)", "blue", "red"),
+        ["col"] = new("col", "[1-2-3-4,2-5,6-7-8]",
+            "click an uncoloured vertex to colour it (Left blue, Right red; never next to your own colour)", "blue", "red"),
     };
 
     public static RulesetReply For(IRuleset rules)

@@ -16,6 +16,7 @@ public class MoveTargetTests
         { "hackenbush", "stalks", 6 }, { "hackenbush", "trees", 9 }, { "hackenbush", "graphs", 10 }, { "hackenbush", "mixed", 12 },
         { "domineering", "rectangles", 6 }, { "domineering", "regions", 14 }, { "domineering", "sums", 3 },
         { "forms", "switches", 3 }, { "forms", "hot", 4 }, { "forms", "hot-extra", 3 }, { "forms", "mixed", 4 },
+        { "snort", "random", 9 }, { "snort", "sums", 12 }, { "col", "grids", 9 }, { "col", "trees", 10 },
     };
 
     [Theory]

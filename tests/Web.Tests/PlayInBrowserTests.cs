@@ -10,7 +10,7 @@ namespace Bramble.Web.Tests;
 public sealed class PlayInBrowserTests(BrowserFixture browser)
 {
     /// <summary>The winner of a position with a side to move, by the engine's exact analysis.</summary>
-    private static Side ExactWinner(string ruleset, string text, Side toMove)
+    internal static Side ExactWinner(string ruleset, string text, Side toMove)
     {
         var rules = Rulesets.Get(ruleset);
         var context = new ValueContext();

@@ -275,6 +275,8 @@ public sealed class TerminalGame(IPosition start, Side human, Side firstMover, I
         ("cutcake", Side.Right) => " (cuts between rows)",
         ("amazons", Side.Left) => " (the L amazons)",
         ("amazons", Side.Right) => " (the R amazons)",
+        ("snort" or "col", Side.Left) => " (colours vertices blue)",
+        ("snort" or "col", Side.Right) => " (colours vertices red)",
         _ => "",
     };
 }

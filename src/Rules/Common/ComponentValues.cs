@@ -22,19 +22,30 @@ public sealed class ComponentValues(IRuleset ruleset, ValueContext context)
     }
 
     /// <summary>The value of one component, from the memo or by search over its options.</summary>
-    public Game ValueOfComponent(IPosition component)
+    public Game ValueOfComponent(IPosition component) =>
+        Memoised(ruleset, context, component.NormalKey, (left, right) =>
+        {
+            foreach (var move in component.Moves(Side.Left)) left.Add(ValueOf(component.Play(Side.Left, move)));
+            foreach (var move in component.Moves(Side.Right)) right.Add(ValueOf(component.Play(Side.Right, move)));
+        });
+
+    /// <summary>
+    /// The memo step every keyed search shares: the value under a signed key (negated when the key
+    /// starts with '-'), or else <paramref name="options"/> fills Left's and Right's option values,
+    /// and the canonical value is stored under the representative's key.
+    /// </summary>
+    public static Game Memoised(IRuleset ruleset, ValueContext context, string key, Action<List<Game>, List<Game>> options)
     {
-        string key = component.NormalKey;
+        var store = context.Store;
         bool negated = key.Length > 1 && key[0] == '-';
         string representative = negated ? key[1..] : key;
-        if (context.TryGetMemo(ruleset, representative, out var known)) return negated ? _store.Negate(known) : known;
+        if (context.TryGetMemo(ruleset, representative, out var known)) return negated ? store.Negate(known) : known;
         context.Tick();
         var left = new List<Game>();
         var right = new List<Game>();
-        foreach (var move in component.Moves(Side.Left)) left.Add(ValueOf(component.Play(Side.Left, move)));
-        foreach (var move in component.Moves(Side.Right)) right.Add(ValueOf(component.Play(Side.Right, move)));
-        var value = _store.Make(left, right);
-        context.SetMemo(ruleset, representative, negated ? _store.Negate(value) : value);
+        options(left, right);
+        var value = store.Make(left, right);
+        context.SetMemo(ruleset, representative, negated ? store.Negate(value) : value);
         return value;
     }
 
