@@ -79,5 +79,6 @@ internal static class KonaneComposition
     public static TargetFacts Facts() => TargetFacts.Remarks(
     [
         $"Konane components are listed as groups of stones on an open board (no edge within reach) whose stones fit a rectangle of at most {LargestBox} squares, at least half of them stones; positions using a board's edge are not looked at",
+        "every short game is the value of some Konane position (\"A nontrivial surjective map onto the short Conway group\", Games of No Chance 5, 2025), so no target is out of reach, only perhaps beyond this listing",
     ]);
 }
