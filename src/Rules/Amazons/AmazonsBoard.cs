@@ -116,32 +116,8 @@ public sealed class AmazonsBoard
 
     private static AmazonsBoard ParseRows(string text, int i)
     {
-        var cells = new List<Square>();
-        int width = -1, count = 0, rows = 0, rowStart = i;
-        int end = text.Length;
-        while (end > i && char.IsWhiteSpace(text[end - 1])) end--;
-        for (; i <= end; i++)
-        {
-            char ch = i < end ? text[i] : '/';
-            if (ch == ' ' || ch == '\t' || ch == '\r') continue;
-            if (Read(ch) is { } square)
-            {
-                if (count == MaxSide) throw new PositionSyntaxException(text, i, $"'/': at most {MaxSide} columns");
-                if (width >= 0 && count == width) throw new PositionSyntaxException(text, i, $"'/': every row has {width} squares, like row 1");
-                cells.Add(square);
-                count++;
-                continue;
-            }
-            if (ch != '/' && ch != '\n') throw new PositionSyntaxException(text, i, rows == 0 && count == 0 ? Example : "'L', 'R', '#', '.' or '/'");
-            if (count == 0) throw new PositionSyntaxException(text, i, "a row of 'L', 'R', '#' and '.'");
-            if (width >= 0 && count != width) throw new PositionSyntaxException(text, i, $"'L', 'R', '#' or '.': every row has {width} squares, like row 1");
-            if (rows == MaxSide) throw new PositionSyntaxException(text, rowStart, $"the end of the board: at most {MaxSide} rows");
-            width = count;
-            count = 0;
-            rows++;
-            rowStart = i + 1;
-        }
-        return new AmazonsBoard(rows, width, cells.ToArray());
+        var (cells, rows, columns) = GridRows.Read<Square>(text, i, Read, ['L', 'R', '#', '.'], MaxSide, MaxSide, Example);
+        return new AmazonsBoard(rows, columns, cells);
     }
 
     public string Text

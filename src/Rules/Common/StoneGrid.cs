@@ -82,33 +82,8 @@ public sealed class StoneGrid
 
     private static StoneGrid ParseRows(string text, int i, string example)
     {
-        var cells = new List<Stone>();
-        int width = -1, count = 0, rows = 0, rowStart = i;
-        int end = text.Length;
-        while (end > i && char.IsWhiteSpace(text[end - 1])) end--;
-        for (; i <= end; i++)
-        {
-            char ch = i < end ? text[i] : '/';
-            bool separator = ch == '/' || ch == '\n';
-            if (ch == ' ' || ch == '\t' || ch == '\r') continue;
-            if (Read(ch) is { } stone)
-            {
-                if (count == MaxColumns) throw new PositionSyntaxException(text, i, $"'/': at most {MaxColumns} columns");
-                if (width >= 0 && count == width) throw new PositionSyntaxException(text, i, $"'/': every row has {width} squares, like row 1");
-                cells.Add(stone);
-                count++;
-                continue;
-            }
-            if (!separator) throw new PositionSyntaxException(text, i, rows == 0 && count == 0 ? example : "'x', 'o', '.' or '/'");
-            if (count == 0) throw new PositionSyntaxException(text, i, "a row of 'x', 'o' and '.'");
-            if (width >= 0 && count != width) throw new PositionSyntaxException(text, i, $"'x', 'o' or '.': every row has {width} squares, like row 1");
-            if (rows == MaxRows) throw new PositionSyntaxException(text, rowStart, $"the end of the board: at most {MaxRows} rows");
-            width = count;
-            count = 0;
-            rows++;
-            rowStart = i + 1;
-        }
-        return new StoneGrid(rows, width, cells.ToArray());
+        var (cells, rows, columns) = GridRows.Read<Stone>(text, i, Read, ['x', 'o', '.'], MaxRows, MaxColumns, example);
+        return new StoneGrid(rows, columns, cells);
     }
 
     public static char Letter(Stone s) => s == Stone.Left ? 'x' : s == Stone.Right ? 'o' : '.';
