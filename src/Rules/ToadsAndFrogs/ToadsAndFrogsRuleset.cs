@@ -33,23 +33,11 @@ public sealed class ToadsAndFrogsRuleset : IRuleset, IComponentCatalogue, ICompo
     public string SizeUnit => "squares";
 
     /// <summary>Every strip of up to <paramref name="size"/> squares (toad, frog or empty on each), shorter strips first.</summary>
-    public IEnumerable<IPosition> ComponentsUpTo(int size)
-    {
-        for (int n = 2; n <= size; n++)
-        {
-            int total = 1;
-            for (int k = 0; k < n; k++) total *= 3;
-            var squares = new Square[n];
-            for (int code = 0; code < total; code++)
-            {
-                int c = code;
-                for (int k = 0; k < n; k++) { squares[k] = (Square)(c % 3); c /= 3; }
-                var position = new ToadsAndFrogsPosition(this, (Square[])squares.Clone());
-                // Only strips that are one live stretch and their own representative: the others are sums or images of these.
-                if (position.Stretches.Count == 1 && position.Stretches[0] == (0, n) && position.NormalKey[0] != '-') yield return position;
-            }
-        }
-    }
+    public IEnumerable<IPosition> ComponentsUpTo(int size) =>
+        // Strips that are their own representative: the others are images of these (negatives).
+        Enumerable.Range(2, Math.Max(0, size - 1))
+            .SelectMany(n => ToadsAndFrogsComposition.ComponentsOfSize(this, n))
+            .Where(p => p.NormalKey[0] != '-');
 
     // ------------------------------------------------------------------ IComposable (bramble compose)
 
