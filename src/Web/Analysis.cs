@@ -24,7 +24,7 @@ public sealed class Analysis(ContextPool contexts)
         return ms;
     }
 
-    public AnalysisReply Analyse(GameState game, int budgetMs, CancellationToken cancel) => WithContext(cancel, context =>
+    public AnalysisReply Analyse(GameState game, int budgetMs, CancellationToken cancel) => contexts.Lend(cancel, context =>
     {
         var clock = Stopwatch.StartNew();
         var store = context.Store;
@@ -62,7 +62,7 @@ public sealed class Analysis(ContextPool contexts)
     /// loses. Only the component a move touches changes, so with the memo each move costs one
     /// component's value and one sum.
     /// </summary>
-    public HintReply Hint(GameState game, int budgetMs, CancellationToken cancel) => WithContext(cancel, context =>
+    public HintReply Hint(GameState game, int budgetMs, CancellationToken cancel) => contexts.Lend(cancel, context =>
     {
         var side = game.ToMove;
         var clock = Stopwatch.StartNew();
@@ -80,7 +80,7 @@ public sealed class Analysis(ContextPool contexts)
         return new HintReply(side.Word(), true, winning, note);
     });
 
-    public ThermographReply Thermograph(ThermographRequest request, int budgetMs, CancellationToken cancel) => WithContext(cancel, context =>
+    public ThermographReply Thermograph(ThermographRequest request, int budgetMs, CancellationToken cancel) => contexts.Lend(cancel, context =>
     {
         var store = context.Store;
         Game g;
@@ -148,19 +148,4 @@ public sealed class Analysis(ContextPool contexts)
         Outcome.N => "whoever moves next wins",
         _ => "whoever moves next loses",
     };
-
-    /// <summary>Lends a context for one request, tied to the request's cancellation, on a thread with a big stack.</summary>
-    private T WithContext<T>(CancellationToken cancel, Func<ValueContext, T> work)
-    {
-        var context = contexts.Rent();
-        context.Cancellation = cancel;
-        try
-        {
-            return BigStack.Run(() => work(context), 64 * 1024 * 1024);
-        }
-        finally
-        {
-            contexts.Return(context);
-        }
-    }
 }

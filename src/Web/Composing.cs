@@ -26,32 +26,23 @@ public sealed class Composing(ContextPool contexts)
         if (count < 1 || count > MaxCount) throw ApiException.Bad($"count must be between 1 and {MaxCount}", "count");
         if (request.MaxSize is < 0 or > MaxSize) throw ApiException.Bad($"max_size must be between 0 and {MaxSize}", "max_size");
 
-        var context = contexts.Rent();
-        context.Cancellation = cancel;
-        try
+        return contexts.Lend(cancel, context =>
         {
-            return BigStack.Run(() =>
-            {
-                var store = context.Store;
-                var target = store.Parse(request.Value);
-                var report = new Composer(rules, context).Run(target, new ComposeSettings(request.MaxSize, count, budget));
-                if (cancel.IsCancellationRequested) throw new OperationCanceledException(cancel);
-                return new ComposeReply(
-                    rules.Name,
-                    store.Format(report.Target),
-                    report.Positions.Select(p => new ComposedReply(p.Position.Text, p.Size, p.RouteWord(), p.FoundMs)).ToList(),
-                    report.SizeUnit,
-                    report.Positions.Count == 0 ? "none" + report.NoneReason() : null,
-                    report.Searched(),
-                    report.Stopped(),
-                    report.Stop.ToString().ToLowerInvariant(),
-                    report.Notes,
-                    report.ElapsedMs);
-            }, 64 * 1024 * 1024);
-        }
-        finally
-        {
-            contexts.Return(context);
-        }
+            var store = context.Store;
+            var target = store.Parse(request.Value);
+            var report = new Composer(rules, context).Run(target, new ComposeSettings(request.MaxSize, count, budget));
+            if (cancel.IsCancellationRequested) throw new OperationCanceledException(cancel);
+            return new ComposeReply(
+                rules.Name,
+                store.Format(report.Target),
+                report.Positions.Select(p => new ComposedReply(p.Position.Text, p.Size, p.RouteWord(), p.FoundMs)).ToList(),
+                report.SizeUnit,
+                report.Positions.Count == 0 ? "none" + report.NoneReason() : null,
+                report.Searched(),
+                report.Stopped(),
+                report.StopWord(),
+                report.Notes,
+                report.ElapsedMs);
+        });
     }
 }

@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using Bramble.Rules;
+using Bramble.Values;
 
 namespace Bramble.Web;
 
@@ -15,6 +16,21 @@ public sealed class ContextPool
     private readonly ConcurrentBag<ValueContext> _free = new();
 
     public ValueContext Rent() => _free.TryTake(out var context) ? context : new ValueContext();
+
+    /// <summary>Lends a context for one request, tied to the request's cancellation, on a thread with a big stack (deep game trees recurse).</summary>
+    public T Lend<T>(CancellationToken cancel, Func<ValueContext, T> work)
+    {
+        var context = Rent();
+        context.Cancellation = cancel;
+        try
+        {
+            return BigStack.Run(() => work(context), 64 * 1024 * 1024);
+        }
+        finally
+        {
+            Return(context);
+        }
+    }
 
     public void Return(ValueContext context)
     {

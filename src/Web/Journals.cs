@@ -46,38 +46,29 @@ public sealed class Journals(ContextPool contexts)
     {
         var game = GameReplay.Rebuild(request);
         int budgetMs = Analysis.Budget(request.BudgetMs ?? 5000);
-        var context = contexts.Rent();
-        context.Cancellation = cancel;
-        try
+        return contexts.Lend(cancel, context =>
         {
-            return BigStack.Run(() =>
+            var clock = System.Diagnostics.Stopwatch.StartNew();
+            var plies = new List<ReplayPlyReply>();
+            var position = game.Start;
+            var mover = game.First;
+            bool exact = true;
+            for (int ply = 0; ply <= game.Played.Count; ply++)
             {
-                var clock = System.Diagnostics.Stopwatch.StartNew();
-                var plies = new List<ReplayPlyReply>();
-                var position = game.Start;
-                var mover = game.First;
-                bool exact = true;
-                for (int ply = 0; ply <= game.Played.Count; ply++)
+                var last = ply == 0 ? null : game.Played[ply - 1];
+                if (last is not null)
                 {
-                    var last = ply == 0 ? null : game.Played[ply - 1];
-                    if (last is not null)
-                    {
-                        position = position.Play(last.Side, last.Move);
-                        mover = last.Side.Other();
-                    }
-                    // A value per ply: the memo makes each one cost the component that changed.
-                    var v = Analysis.TryValue(game.Rules, position, context, budgetMs - clock.ElapsedMilliseconds);
-                    exact &= v is not null;
-                    var outcome = v is { } g ? context.Store.OutcomeOf(g) : (Outcome?)null;
-                    plies.Add(new ReplayPlyReply(ply, last?.Side.Word(), last?.Text, position.Text, mover.Word(), BoardView.Picture(position),
-                        v is { } value ? context.Store.Format(value) : null, outcome?.ToString(), outcome?.WinnerMovingFirst(mover).Word()));
+                    position = position.Play(last.Side, last.Move);
+                    mover = last.Side.Other();
                 }
-                return new ReplayReply(plies, exact);
-            }, 64 * 1024 * 1024);
-        }
-        finally
-        {
-            contexts.Return(context);
-        }
+                // A value per ply: the memo makes each one cost the component that changed.
+                var v = Analysis.TryValue(game.Rules, position, context, budgetMs - clock.ElapsedMilliseconds);
+                exact &= v is not null;
+                var outcome = v is { } g ? context.Store.OutcomeOf(g) : (Outcome?)null;
+                plies.Add(new ReplayPlyReply(ply, last?.Side.Word(), last?.Text, position.Text, mover.Word(), BoardView.Picture(position),
+                    v is { } value ? context.Store.Format(value) : null, outcome?.ToString(), outcome?.WinnerMovingFirst(mover).Word()));
+            }
+            return new ReplayReply(plies, exact);
+        });
     }
 }

@@ -92,7 +92,7 @@ public static class ComposeVerb
             ["sums_tried"] = r.SumsTried,
             ["elapsed_ms"] = r.ElapsedMs,
             ["first_ms"] = r.FirstMs,
-            ["stopped"] = r.Stop.ToString().ToLowerInvariant(),
+            ["stopped"] = r.StopWord(),
             ["notes"] = new JsonArray(r.Notes.Select(n => (JsonNode?)JsonValue.Create(n)).ToArray()),
         };
         return o.ToJsonString(new JsonSerializerOptions { Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });

@@ -1,7 +1,7 @@
 namespace Bramble.Rules.Common;
 
 /// <summary>
-/// Reads the rows of a board written one letter per square, rows separated by '/' or newlines
+/// Reads (and writes) the rows of a board written one letter per square, rows separated by '/' or newlines
 /// (spaces and tabs ignored), every row as long as the first; the one reader behind the Clobber,
 /// Konane and Amazons notations, so that their messages point at faults the same way.
 /// </summary>
@@ -40,6 +40,18 @@ public static class GridRows
             rowStart = i + 1;
         }
         return (cells.ToArray(), rows, width);
+    }
+
+    /// <summary>The board written back: one letter per square, rows separated by '/'.</summary>
+    public static string Write<T>(ReadOnlySpan<T> cells, int rows, int columns, Func<T, char> letter)
+    {
+        var sb = new System.Text.StringBuilder(rows * (columns + 1));
+        for (int r = 0; r < rows; r++)
+        {
+            if (r > 0) sb.Append('/');
+            for (int c = 0; c < columns; c++) sb.Append(letter(cells[r * columns + c]));
+        }
+        return sb.ToString();
     }
 
     private static string List(IReadOnlyList<char> letters, string last) =>

@@ -1,5 +1,3 @@
-using System.Text;
-
 namespace Bramble.Rules.Common;
 
 /// <summary>
@@ -88,35 +86,14 @@ public sealed class StoneGrid
 
     public static char Letter(Stone s) => s == Stone.Left ? 'x' : s == Stone.Right ? 'o' : '.';
 
-    public string Text
-    {
-        get
-        {
-            var sb = new StringBuilder(Rows * (Columns + 1));
-            for (int r = 0; r < Rows; r++)
-            {
-                if (r > 0) sb.Append('/');
-                for (int c = 0; c < Columns; c++) sb.Append(Letter(At(r, c)));
-            }
-            return sb.ToString();
-        }
-    }
+    public string Text => GridRows.Write(Cells, Rows, Columns, Letter);
 
     // ---- square names ----
 
-    public string CellName(int cell) => $"{(char)('a' + cell % Columns)}{cell / Columns + 1}";
+    public string CellName(int cell) => SquareNames.Format(cell, Columns);
 
     /// <summary>Reads a square name such as <c>c4</c> from <paramref name="text"/> at <paramref name="i"/>; null when there is none or it is off the board.</summary>
-    public int? ReadCell(string text, ref int i)
-    {
-        if (i >= text.Length || !char.IsAsciiLetter(text[i])) return null;
-        int column = char.ToLowerInvariant(text[i]) - 'a';
-        int j = i + 1, row = 0;
-        while (j < text.Length && char.IsAsciiDigit(text[j]) && row <= MaxRows) { row = row * 10 + (text[j] - '0'); j++; }
-        if (j == i + 1 || row < 1 || row > Rows || column >= Columns) return null;
-        i = j;
-        return Index(row - 1, column);
-    }
+    public int? ReadCell(string text, ref int i) => SquareNames.Read(text, ref i, Rows, Columns);
 
     /// <summary>Reads "from-to" (also "from to", "fromxto", "fromto") as two squares; throws <see cref="IllegalMoveException"/> with <paramref name="example"/>.</summary>
     public (int From, int To) ReadMove(string text, string example)

@@ -34,5 +34,8 @@ public static class ComposeWords
         _ => "ruled out",
     };
 
+    /// <summary>The stop as one lower-case word for JSON: enough, bound, listinglimit, budget, ruledout.</summary>
+    public static string StopWord(this ComposeReport r) => r.Stop.ToString().ToLowerInvariant();
+
     public static string RouteWord(this ComposedPosition p) => p.Route == ComposeRoute.Construction ? "construction" : "search";
 }
