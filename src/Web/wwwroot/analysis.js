@@ -16,7 +16,11 @@ export class AnalysisPanel {
     this.last = null;
   }
 
-  cancel() { this.#slot.cancel(); }
+  /** The board is about to change: stop any analysis running and stop claiming the one shown is done. */
+  stale() {
+    this.#slot.cancel();
+    this.element.dataset.done = 'false';
+  }
 
   async run(game) {
     this.element.dataset.done = 'false';

@@ -84,6 +84,7 @@ export class EditView {
 
   async refresh(text) {
     const game = { ruleset: this.ruleset(), start: text, first: 'left', moves: [] };
+    this.analysis.stale();
     try {
       const b = await this.#board.post('/api/board', game);
       $('edit-error').textContent = '';

@@ -91,7 +91,7 @@ export class PlayView {
 
   async send(extra, fresh = false) {
     this.error('');
-    this.analysis.cancel();
+    this.analysis.stale();
     this.busy(true);
     const before = this.game.moves.length;
     try {
