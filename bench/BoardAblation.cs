@@ -42,6 +42,7 @@ public static class BoardAblation
             ("no-child-lookup", all with { ChildLookup = false }),
             ("no-killers-history", all with { KillersAndHistory = false }),
             ("no-blocks", all with { ProtectiveBlocks = false }),
+            ("no-block-margin", all with { BlockMargin = false }),
             ("no-lone-spares", all with { LoneSpares = false }),
             ("no-child-bounds", all with { ChildBounds = false }),
             ("split-below-root", all with { SplitBelowRoot = true }),

@@ -95,6 +95,10 @@ public class WholeBoardTests
         AgreesWithPlainSearch(new BoardSearchOptions { ProtectiveBlocks = false, LoneSpares = true }, 1910, 800);
 
     [Fact]
+    public void BlockMarginOffAgreesWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { BlockMargin = false }, 1912, 600);
+
+    [Fact]
     public void BoundsAtTheNodeOnlyAgreeWithPlainSearch() =>
         AgreesWithPlainSearch(new BoardSearchOptions { ChildBounds = false }, 1909, 600);
 
@@ -113,6 +117,12 @@ public class WholeBoardTests
             // Blocks alone: each one the side plays into is worth two moves, and the opponent spoils one per turn.
             Assert.Equal(2 * ((p + 1) / 2), sure.Get(p, 0, 0, movesFirst: true));
             Assert.Equal(2 * (p / 2), sure.Get(p, 0, 0, movesFirst: false));
+        }
+        for (int p = 0; p <= SureMoves.MaxBlocks; p++)
+        {
+            // In the margin race a block the side takes also takes the opponent's two moves in it: four.
+            Assert.Equal(4 * ((p + 1) / 2), SureMoves.Margin.Get(p, 0, 0, movesFirst: true));
+            Assert.Equal(4 * (p / 2), SureMoves.Margin.Get(p, 0, 0, movesFirst: false));
         }
         for (int v = 0; v <= SureMoves.MaxSpare; v++)
         {

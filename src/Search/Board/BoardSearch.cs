@@ -45,6 +45,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         _stop = stop;
         _options = options;
         _spent = spent ?? (() => false);
+        _sure = options.BlockMargin ? SureMoves.Margin : SureMoves.Shared;
         Array.Fill(_killers, -1);
         for (int v = 0; v < 2; v++)
         {
@@ -229,7 +230,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     private int Guaranteed(int safe, int blocks, int lone, int spare, bool movesFirst) =>
         safe + _sure.Get(blocks, lone, spare, movesFirst);
 
-    private readonly SureMoves _sure = SureMoves.Shared;
+    private readonly SureMoves _sure;
     private ulong Key(int s, out int mirror)
     {
         ulong best = _hash[s * 4];

@@ -26,6 +26,12 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool LoneSpares { get; init; } = true;
 
+    /// <summary>
+    /// In the bounds, a protective block the side plays into also takes both opponent moves in it
+    /// off the opponent's possible moves, so the race counts it four, not two (<see cref="SureMoves.Margin"/>).
+    /// </summary>
+    public bool BlockMargin { get; init; } = true;
+
     /// <summary>Positions equal up to a mirror image (and, on square boards, a transposition with the roles swapped) share one table entry.</summary>
     public bool Symmetry { get; init; } = true;
 

@@ -8,6 +8,14 @@ namespace Bramble.Search.Board;
 /// from the race with best play on both sides, moving first or second. Restricting the side's
 /// choices only lowers the figure, so it stays a lower bound. With spares alone it is one in three
 /// (⌈x/3⌉ first, ⌈(x−2)/3⌉ second); with lone spares alone one in two.
+/// <para>
+/// <see cref="Margin"/> plays the same race for the bounds' comparison itself rather than for the
+/// side's moves alone: a block the side plays into also takes away both of the opponent's moves
+/// in it (its rows are runs of exactly two across, each one opponent move, and a move down one
+/// column leaves a single cell in each row), so it is worth four — two moves more for the side,
+/// two fewer for the opponent's possible moves, which count them. A block the opponent spoils
+/// uses one of those two counted moves and leaves the other, so the opponent's count stands.
+/// </para>
 /// Immutable once built; one instance serves every search.
 /// </summary>
 public sealed class SureMoves
@@ -19,10 +27,16 @@ public sealed class SureMoves
     private readonly byte[] _first = new byte[(MaxBlocks + 1) * Spares * Spares];
     private readonly byte[] _second = new byte[(MaxBlocks + 1) * Spares * Spares];
 
-    /// <summary>The one table every search reads (it never changes after it is built).</summary>
-    public static SureMoves Shared { get; } = new();
+    /// <summary>The side's sure moves: a block is worth two (this move and the safe one it makes).</summary>
+    public static SureMoves Shared { get; } = new(blockWorth: 2);
 
-    private SureMoves()
+    /// <summary>
+    /// The side's sure moves plus the opponent's possible moves its blocks take away: a block is
+    /// worth four. Compared with the opponent's possible moves counted before the race.
+    /// </summary>
+    public static SureMoves Margin { get; } = new(blockWorth: 4);
+
+    private SureMoves(int blockWorth)
     {
         // In increasing order of each count: every entry needs only entries with one count lower.
         for (int p = 0; p <= MaxBlocks; p++)
@@ -30,7 +44,7 @@ public sealed class SureMoves
                 for (int x = 0; x <= MaxSpare; x++)
                 {
                     int first = 0;
-                    if (p > 0) first = Math.Max(first, 2 + _second[Index(p - 1, v, x)]);
+                    if (p > 0) first = Math.Max(first, blockWorth + _second[Index(p - 1, v, x)]);
                     if (v > 0) first = Math.Max(first, 1 + _second[Index(p, v - 1, x)]);
                     if (x > 0) first = Math.Max(first, 1 + _second[Index(p, v, x - 1)]);
                     _first[Index(p, v, x)] = (byte)first;
