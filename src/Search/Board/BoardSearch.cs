@@ -25,6 +25,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     private readonly StopSignal _stop;
     private readonly Func<bool> _spent;
     private readonly BoardSearchOptions _options;
+    private readonly RegionLeaves<T>? _leaves;
 
     private readonly T[] _board = new T[2];
     private readonly ulong[] _hash = new ulong[8];
@@ -45,6 +46,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         _stop = stop;
         _options = options;
         _spent = spent ?? (() => false);
+        if (options.RegionLeaves) _leaves = new RegionLeaves<T>(shape, options.RegionLeafCells);
         Array.Fill(_killers, -1);
         for (int v = 0; v < 2; v++)
         {
@@ -267,6 +269,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;
+        if (_leaves is not null && _leaves.TryDecide(me, s, out bool summed)) return summed;
 
         long start = Nodes;
         Span<int> moves = stackalloc int[_shape.Cells];
