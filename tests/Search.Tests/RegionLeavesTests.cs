@@ -96,6 +96,25 @@ public class RegionLeavesTests
     }
 
     [Fact]
+    public void BoardsOfMoreThan64CellsUseTheWideBitboards()
+    {
+        // Random 8×9 boards (72 cells, so 128-bit bitboards) with about half the cells filled: the
+        // leaves agree with the whole-board search without them (cross-checked against plain
+        // search in WholeBoardTests).
+        var rnd = new Random(1916);
+        var plain = new WholeBoard(new BoardSearchOptions { TableLog2 = 12 });
+        var withLeaves = new WholeBoard(new BoardSearchOptions { RegionLeaves = true, TableLog2 = 12 });
+        for (int n = 0; n < 40; n++)
+        {
+            var text = string.Join("/", Enumerable.Range(0, 8).Select(_ =>
+                new string(Enumerable.Range(0, 9).Select(_ => rnd.NextDouble() < 0.5 ? '#' : '.').ToArray())));
+            var position = (DomineeringPosition)Rules.Parse(text);
+            foreach (var side in new[] { Side.Left, Side.Right })
+                Assert.True(plain.Solve(position, side).Win == withLeaves.Solve(position, side).Win, $"{side.Word()} first on {text}");
+        }
+    }
+
+    [Fact]
     public void ARegionTooBigForBothSidesIsLeftToTheSearch()
     {
         // A 3×5 block (15 cells, both sides can move) with a cap of 12 cannot be valued.

@@ -269,7 +269,12 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;
-        if (_leaves is not null && _leaves.TryDecide(me, s, out bool summed)) return summed;
+        if (_leaves is not null && _leaves.TryDecide(me, s, out bool summed))
+        {
+            // Stored (without a move) so that the parent's child lookup finds it as it would a searched node.
+            _table.Store(key, summed, OutcomeTable.NoMove, 1);
+            return summed;
+        }
 
         long start = Nodes;
         Span<int> moves = stackalloc int[_shape.Cells];

@@ -22,14 +22,14 @@ namespace Bramble.Search.Board;
 /// Values come from <see cref="RegionValues"/> once per region shape (its normal form, so mirror
 /// images and transposes share one), then from a dictionary keyed by the normal form's bitboard,
 /// and in front of it a direct-mapped cache keyed by the region's own bits in the view: after the
-/// first time nothing builds a string. One instance per search thread (the game store is not
+/// first time nothing builds a string. The search stores a decided node in its table like a
+/// searched one. One instance per search thread (the game store is not
 /// thread-safe).
 /// </summary>
 public sealed class RegionLeaves<T> where T : unmanaged, IBinaryInteger<T>
 {
     private const int CacheLog2 = 15;
-    // More regions than this at one node: left to the search (never met on boards of 128 cells
-    // with regions of at least two cells each… but the span must have a size).
+    // Regions of live cells have at least two cells each, so 128 cells make at most 64.
     private const int MaxParts = 64;
 
     private readonly BoardShape _shape;
@@ -113,7 +113,6 @@ public sealed class RegionLeaves<T> where T : unmanaged, IBinaryInteger<T>
             else if ((part & verticalCells) == T.Zero) integer -= MostDominoes(part, 1, notLast);
             else
             {
-                if (n == MaxParts) return false;
                 parts[n++] = part;
             }
         }
