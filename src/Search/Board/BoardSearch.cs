@@ -52,14 +52,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         {
             int h = shape.Height[v], w = shape.Width[v];
             _rowMask[v] = w >= 32 ? uint.MaxValue : (1u << w) - 1;
-            T notLast = T.Zero, notFirst = T.Zero;
-            for (int p = 0; p < shape.Cells; p++)
-            {
-                if (p % w != w - 1) notLast |= T.One << p;
-                if (p % w != 0) notFirst |= T.One << p;
-            }
-            _notLastColumn[v] = notLast;
-            _notFirstColumn[v] = notFirst;
+            (_notLastColumn[v], _notFirstColumn[v]) = ColumnMasks.Of<T>(shape, v);
             _clearOwn[v] = new T[shape.Cells];
             _clearOther[v] = new T[shape.Cells];
             for (int i = 0; i + w < shape.Cells; i++)

@@ -50,18 +50,7 @@ public sealed class RegionLeaves<T> where T : unmanaged, IBinaryInteger<T>
         _shape = shape;
         _cap = cap;
         _wide = shape.Cells > 64;
-        for (int v = 0; v < 2; v++)
-        {
-            int w = shape.Width[v];
-            T notLast = T.Zero, notFirst = T.Zero;
-            for (int p = 0; p < shape.Cells; p++)
-            {
-                if (p % w != w - 1) notLast |= T.One << p;
-                if (p % w != 0) notFirst |= T.One << p;
-            }
-            _notLastColumn[v] = notLast;
-            _notFirstColumn[v] = notFirst;
-        }
+        for (int v = 0; v < 2; v++) (_notLastColumn[v], _notFirstColumn[v]) = ColumnMasks.Of<T>(shape, v);
         var context = new ValueContext();
         _store = context.Store;
         _values = new RegionValues(new DomineeringRuleset(), context);
