@@ -47,6 +47,12 @@ public static class BoardAblation
             ("no-child-bounds", all with { ChildBounds = false }),
             ("split-below-root", all with { SplitBelowRoot = true }),
             ("skip-safe", all with { SkipSafeMoves = true }),
+            ("region-leaves", all with { RegionLeaves = true }),
+            ("region-leaves-8", all with { RegionLeaves = true, RegionLeafCells = 8 }),
+            ("region-leaves-16", all with { RegionLeaves = true, RegionLeafCells = 16 }),
+            ("region-leaves-0", all with { RegionLeaves = true, RegionLeafCells = 0 }),
+            ("no-bounds+region-leaves", all with { SafeMoveBounds = false, RegionLeaves = true }),
+            ("no-bounds+region-leaves-16", all with { SafeMoveBounds = false, RegionLeaves = true, RegionLeafCells = 16 }),
         };
         var rules = Rulesets.Get("domineering");
         Console.WriteLine("| board | first | configuration | winner | nodes | ms |");

@@ -103,6 +103,23 @@ public class WholeBoardTests
         AgreesWithPlainSearch(new BoardSearchOptions { ChildBounds = false }, 1909, 600);
 
     [Fact]
+    public void RegionLeavesAgreeWithPlainSearch() =>
+        // Nodes split into small regions decided by the sum of their values (Barton and Uiterwijk, BNAIC 2014).
+        AgreesWithPlainSearch(new BoardSearchOptions { RegionLeaves = true }, 1912, 2000);
+
+    [Fact]
+    public void RegionLeavesOfFewCellsAgreeWithPlainSearch() =>
+        // A cap of four cells: most regions are too big to value, or are counted as one side's integer.
+        AgreesWithPlainSearch(new BoardSearchOptions { RegionLeaves = true, RegionLeafCells = 4 }, 1913, 1500);
+
+    [Fact]
+    public void RegionLeavesWithoutTheOtherShortcutsAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions
+        {
+            RegionLeaves = true, SafeMoveBounds = false, Symmetry = false, CountOrdering = false, KillersAndHistory = false,
+        }, 1914, 1000);
+
+    [Fact]
     public void TheBlockAndSpareRaceHasItsClosedForms()
     {
         var sure = SureMoves.Shared;

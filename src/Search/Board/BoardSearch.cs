@@ -25,6 +25,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     private readonly StopSignal _stop;
     private readonly Func<bool> _spent;
     private readonly BoardSearchOptions _options;
+    private readonly RegionLeaves<T>? _leaves;
 
     private readonly T[] _board = new T[2];
     private readonly ulong[] _hash = new ulong[8];
@@ -46,19 +47,13 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         _options = options;
         _spent = spent ?? (() => false);
         _sure = options.BlockMargin ? SureMoves.Margin : SureMoves.Shared;
+        if (options.RegionLeaves) _leaves = new RegionLeaves<T>(shape, options.RegionLeafCells);
         Array.Fill(_killers, -1);
         for (int v = 0; v < 2; v++)
         {
             int h = shape.Height[v], w = shape.Width[v];
             _rowMask[v] = w >= 32 ? uint.MaxValue : (1u << w) - 1;
-            T notLast = T.Zero, notFirst = T.Zero;
-            for (int p = 0; p < shape.Cells; p++)
-            {
-                if (p % w != w - 1) notLast |= T.One << p;
-                if (p % w != 0) notFirst |= T.One << p;
-            }
-            _notLastColumn[v] = notLast;
-            _notFirstColumn[v] = notFirst;
+            (_notLastColumn[v], _notFirstColumn[v]) = ColumnMasks.Of<T>(shape, v);
             _clearOwn[v] = new T[shape.Cells];
             _clearOther[v] = new T[shape.Cells];
             for (int i = 0; i + w < shape.Cells; i++)
@@ -268,6 +263,12 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;
+        if (_leaves is not null && _leaves.TryDecide(me, s, out bool summed))
+        {
+            // Stored (without a move) so that the parent's child lookup finds it as it would a searched node.
+            _table.Store(key, summed, OutcomeTable.NoMove, 1);
+            return summed;
+        }
 
         long start = Nodes;
         Span<int> moves = stackalloc int[_shape.Cells];

@@ -67,6 +67,16 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool SkipSafeMoves { get; init; }
 
+    /// <summary>
+    /// Decide a node without search when its empty cells fall apart into regions that are each
+    /// small (at most <see cref="RegionLeafCells"/> cells) or playable by one side only: the
+    /// outcome of the sum of their exact values (Barton and Uiterwijk, BNAIC 2014; <see cref="RegionLeaves{T}"/>).
+    /// </summary>
+    public bool RegionLeaves { get; init; }
+
+    /// <summary>The most cells of a region both sides can move in, for <see cref="RegionLeaves"/>.</summary>
+    public int RegionLeafCells { get; init; } = 12;
+
     /// <summary>Buckets of the transposition table as a power of two (32 bytes each).</summary>
     public int TableLog2 { get; init; } = 21;
 
