@@ -65,6 +65,19 @@ public class KnownRectanglesTests
     [InlineData(14, 11, true)]
     [InlineData(18, 11, true)]
     [InlineData(18, 6, null)]
+    // "3 boards that were not solved before, i.e., 6 x 15, being a win for Vertical, and 11 x 14 and
+    // 11 x 18, both being a win for Horizontal" — Uiterwijk, "The impact of safe moves on perfectly
+    // solving Domineering boards, part 1", ICGA Journal 37(2) (2014), abstract: 11×14 and 11×18 fall
+    // under 11×2k, k ≥ 6 (part 3); 6×15 under no theorem (part 3 only conjectures (4k+2)×15).
+    [InlineData(11, 14, false)]
+    [InlineData(11, 18, false)]
+    [InlineData(6, 15, null)]
+    // "6 × 19, 10 × 15, 14 × 15, and 18 × 15, all being a win for Vertical" — part 2, ICGA Journal
+    // 37(3) (2014), abstract: found by the knowledge rules, under no theorem.
+    [InlineData(6, 19, null)]
+    [InlineData(10, 15, null)]
+    [InlineData(14, 15, null)]
+    [InlineData(18, 15, null)]
     // "Using the convention that Vertical starts, the 8×15, 11×9, 12×8, 12×15, 14×8, and 17×6 boards
     // are all won by Vertical, whereas the 6×17, 8×12, 9×11, and 11×10 boards are all won by
     // Horizontal" — Uiterwijk, "11×11 Domineering is solved: the first player wins", CG 2016
