@@ -6,7 +6,12 @@ namespace Bramble.Search.Board;
 /// <summary>A published theorem on who wins empty Domineering rectangles with Vertical (Left) moving first.</summary>
 /// <param name="Name">The boards it covers, as the paper writes them (m rows, n columns).</param>
 /// <param name="Source">Author, title, venue and year.</param>
-public sealed record RectangleTheorem(string Name, Side VerticalFirstWinner, string Source);
+/// <param name="Board">Whether it covers the m×n board (m rows, n columns).</param>
+public sealed record RectangleTheorem(string Name, Side VerticalFirstWinner, string Source, Func<int, int, bool> Board)
+{
+    /// <summary>Whether the theorem covers the m×n rectangle (m rows, n columns) with Vertical moving first.</summary>
+    public bool Covers(int m, int n) => Board(m, n);
+}
 
 /// <summary>The winner of an empty rectangle with a given side to move, and the theorem that says so.</summary>
 public sealed record KnownWinner(Side Winner, RectangleTheorem Theorem);
@@ -28,35 +33,21 @@ public static class KnownRectangles
     private const string Cgw2013 = "Uiterwijk, \"Perfectly solving Domineering boards\", CGW 2013 (Springer CCIS 408, 2014)";
     private const string Icga2014 = "Uiterwijk, \"The impact of safe moves on perfectly solving Domineering boards, part 3\", ICGA Journal 37(4) (2014)";
 
-    public static readonly RectangleTheorem ThreeColumns = new("m×3 (m > 1)", Side.Left, Cgw2013);
-    public static readonly RectangleTheorem EvenRowsOddColumns = new("2k×n (n = 3, 5, 7, 9, 11)", Side.Left, Cgw2013);
-    public static readonly RectangleTheorem EvenRowsThirteenColumns = new("2k×13 (k ≥ 3)", Side.Left, Icga2014);
-    public static readonly RectangleTheorem ThreeRows = new("3×n (n > 3)", Side.Right, Cgw2013);
-    public static readonly RectangleTheorem FiveOrNineRows = new("m×2k (m = 5, 9)", Side.Right, Cgw2013);
-    public static readonly RectangleTheorem ThreeOrSevenRows = new("m×2k (m = 3, 7; k > 1)", Side.Right, Cgw2013);
-    public static readonly RectangleTheorem ElevenRows = new("11×4k", Side.Right, Cgw2013);
-    public static readonly RectangleTheorem ElevenRowsWide = new("11×2k (k ≥ 6)", Side.Right, Icga2014);
-    public static readonly RectangleTheorem ThirteenRows = new("m×2k (m = 13)", Side.Right, Icga2014);
+    private static bool Even(int n) => n % 2 == 0 && n >= 2;
+
+    public static readonly RectangleTheorem ThreeColumns = new("m×3 (m > 1)", Side.Left, Cgw2013, (m, n) => n == 3 && m > 1);
+    public static readonly RectangleTheorem EvenRowsOddColumns = new("2k×n (n = 3, 5, 7, 9, 11)", Side.Left, Cgw2013, (m, n) => Even(m) && n is 3 or 5 or 7 or 9 or 11);
+    public static readonly RectangleTheorem EvenRowsThirteenColumns = new("2k×13 (k ≥ 3)", Side.Left, Icga2014, (m, n) => Even(m) && m >= 6 && n == 13);
+    public static readonly RectangleTheorem ThreeRows = new("3×n (n > 3)", Side.Right, Cgw2013, (m, n) => m == 3 && n > 3);
+    public static readonly RectangleTheorem FiveOrNineRows = new("m×2k (m = 5, 9)", Side.Right, Cgw2013, (m, n) => m is 5 or 9 && Even(n));
+    public static readonly RectangleTheorem ThreeOrSevenRows = new("m×2k (m = 3, 7; k > 1)", Side.Right, Cgw2013, (m, n) => m is 3 or 7 && Even(n) && n >= 4);
+    public static readonly RectangleTheorem ElevenRows = new("11×4k", Side.Right, Cgw2013, (m, n) => m == 11 && n % 4 == 0 && n >= 4);
+    public static readonly RectangleTheorem ElevenRowsWide = new("11×2k (k ≥ 6)", Side.Right, Icga2014, (m, n) => m == 11 && Even(n) && n >= 12);
+    public static readonly RectangleTheorem ThirteenRows = new("m×2k (m = 13)", Side.Right, Icga2014, (m, n) => m == 13 && Even(n));
 
     /// <summary>Every theorem, in the order they are tried.</summary>
     public static IReadOnlyList<RectangleTheorem> All { get; } =
         [ThreeColumns, EvenRowsOddColumns, EvenRowsThirteenColumns, ThreeRows, FiveOrNineRows, ThreeOrSevenRows, ElevenRows, ElevenRowsWide, ThirteenRows];
-
-    /// <summary>Whether the theorem covers the m×n rectangle (m rows, n columns) with Vertical moving first.</summary>
-    public static bool Covers(RectangleTheorem theorem, int m, int n)
-    {
-        bool evenN = n % 2 == 0 && n >= 2;
-        if (ReferenceEquals(theorem, ThreeColumns)) return n == 3 && m > 1;
-        if (ReferenceEquals(theorem, EvenRowsOddColumns)) return m % 2 == 0 && m >= 2 && n is 3 or 5 or 7 or 9 or 11;
-        if (ReferenceEquals(theorem, EvenRowsThirteenColumns)) return m % 2 == 0 && m >= 6 && n == 13;
-        if (ReferenceEquals(theorem, ThreeRows)) return m == 3 && n > 3;
-        if (ReferenceEquals(theorem, FiveOrNineRows)) return m is 5 or 9 && evenN;
-        if (ReferenceEquals(theorem, ThreeOrSevenRows)) return m is 3 or 7 && evenN && n >= 4;
-        if (ReferenceEquals(theorem, ElevenRows)) return m == 11 && n % 4 == 0 && n >= 4;
-        if (ReferenceEquals(theorem, ElevenRowsWide)) return m == 11 && evenN && n >= 12;
-        if (ReferenceEquals(theorem, ThirteenRows)) return m == 13 && evenN;
-        throw new ArgumentException("not one of the listed theorems", nameof(theorem));
-    }
 
     /// <summary>
     /// The winner of the empty rectangle of <paramref name="rows"/> × <paramref name="columns"/> with
@@ -68,7 +59,7 @@ public static class KnownRectangles
         var (m, n) = toMove == Side.Left ? (rows, columns) : (columns, rows);
         foreach (var theorem in All)
         {
-            if (!Covers(theorem, m, n)) continue;
+            if (!theorem.Covers(m, n)) continue;
             var winner = toMove == Side.Left ? theorem.VerticalFirstWinner : theorem.VerticalFirstWinner.Other();
             return new KnownWinner(winner, theorem);
         }
