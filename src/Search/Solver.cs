@@ -7,7 +7,9 @@ namespace Bramble.Search;
 /// <param name="Winner">The winner, or null when the search ran out of budget.</param>
 /// <param name="Move">A winning first move for <paramref name="First"/> when it wins, else null.</param>
 /// <param name="Line">The principal line the search reported (winning moves for the winner, stubborn defence for the loser), when it has one.</param>
-public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact, IReadOnlyList<string>? Line = null);
+/// <param name="Theorem">The published theorem that gave the winner without search, when one did (<see cref="Board.KnownRectangles"/>).</param>
+public sealed record SolveAnswer(Side First, Side? Winner, string? Move, long Nodes, long ElapsedMs, bool Exact, IReadOnlyList<string>? Line = null,
+    Board.RectangleTheorem? Theorem = null);
 
 /// <summary>What <c>bramble solve</c> reports (docs/cli.md).</summary>
 /// <param name="Outcome">The outcome class, when both sides were solved exactly.</param>
@@ -28,9 +30,15 @@ public static class Solver
             var answer = new SolveAnswer(first, winner, move, d.Nodes, d.ElapsedMs, d.Exact && winner is not null, d.Exact ? d.Line : null);
             if (first == Side.Left) left = answer; else right = answer;
         }
+        return Report(left, right, player.Name);
+    }
+
+    /// <summary>The report of one or two answers: the outcome class when both are known, the nodes and time of both.</summary>
+    public static SolveReport Report(SolveAnswer? left, SolveAnswer? right, string strategy)
+    {
         var answers = new[] { left, right }.Where(a => a is not null).Select(a => a!).ToList();
         Outcome? outcome = left?.Winner is { } lw && right?.Winner is { } rw ? OutcomeExtensions.FromWinners(lw, rw) : null;
-        return new SolveReport(outcome, left, right, answers.Sum(a => a.Nodes), answers.Sum(a => a.ElapsedMs), player.Name,
+        return new SolveReport(outcome, left, right, answers.Sum(a => a.Nodes), answers.Sum(a => a.ElapsedMs), strategy,
             answers.All(a => a.Exact));
     }
 }

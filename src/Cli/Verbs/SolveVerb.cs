@@ -29,7 +29,8 @@ public static class SolveVerb
         var threads = new Option<int>("--threads") { Description = "Threads of the whole-board search of big Domineering boards", DefaultValueFactory = _ => Math.Min(2, Environment.ProcessorCount), HelpName = "N" };
         var table = new Option<FileInfo?>("--table") { Description = "Whole-board table file: read before the solve when it exists, written after it (so an interrupted solve resumes)", HelpName = "FILE" };
         var progress = new Option<bool>("--progress") { Description = "Report nodes, nodes per second and the root move being searched on stderr every few seconds" };
-        var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json, threads, table, progress };
+        var search = new Option<bool>("--search") { Description = "Search even where a published theorem gives the winner (empty Domineering rectangles)" };
+        var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json, threads, table, progress, search };
         command.Options.Add(DbOption.Option);
         command.SetAction(parse => Failures.Guard(() =>
         {
@@ -47,7 +48,7 @@ public static class SolveVerb
             var db = parse.GetValue(DbOption.Option);
             int n = parse.GetValue(threads);
             if (n < 1 || n > 64) throw new InputException($"--threads must be between 1 and 64, got {n}");
-            var extra = new SolveExtras(n, parse.GetValue(table), parse.GetValue(progress));
+            var extra = new SolveExtras(n, parse.GetValue(table), parse.GetValue(progress), parse.GetValue(search));
             var report = BigStack.Run(() => Solve(rules, text, firsts, parse.GetValue(strategy)!, TimeSpan.FromMilliseconds(ms), db, extra));
             Console.Out.WriteLine(parse.GetValue(json) ? ToJson(report) : ToText(report));
             return Entry.Success;
@@ -55,8 +56,11 @@ public static class SolveVerb
         return command;
     }
 
-    /// <summary>The whole-board options of <c>solve</c>: threads, a table file to resume from, progress on stderr.</summary>
-    public sealed record SolveExtras(int Threads = 1, FileInfo? Table = null, bool Progress = false);
+    /// <summary>
+    /// The whole-board options of <c>solve</c>: threads, a table file to resume from, progress on
+    /// stderr, and whether to search where a published theorem already gives the winner.
+    /// </summary>
+    public sealed record SolveExtras(int Threads = 1, FileInfo? Table = null, bool Progress = false, bool Search = false);
 
     public static SolveReport Solve(IRuleset rules, string text, IReadOnlyCollection<Side> firsts, string strategy, TimeSpan budget, FileInfo? db = null, SolveExtras? extras = null)
     {
@@ -86,7 +90,7 @@ public static class SolveVerb
         using var timer = extras.Progress ? new Timer(_ => Report(player.WholeBoard.Current), null, 2000, 2000) : null;
         try
         {
-            var report = Solver.Solve(pos, firsts, player, budget, halt.Token);
+            var report = extras.Search ? Solver.Solve(pos, firsts, player, budget, halt.Token) : TheoremsFirst.Solve(pos, firsts, player, budget, halt.Token);
             DbOption.Save(db, context);
             return report;
         }
@@ -119,8 +123,10 @@ public static class SolveVerb
             string move = a.Move is { } m ? $", e.g. {m}" : "";
             w.WriteLine($"{(a.First == Side.Left ? "left first " : "right first")}  {who}{move}");
             if (a.Line is { Count: > 1 } line) w.WriteLine($"             line {string.Join(" ", line)}");
+            if (a.Theorem is { } t) w.WriteLine($"             by theorem: {t.Name}, {t.Source}");
         }
-        w.WriteLine($"search       {r.Strategy}, {r.Nodes} nodes, {r.ElapsedMs} ms, {(r.Exact ? "exact" : "not exact (budget spent)")}");
+        if (new[] { r.LeftFirst, r.RightFirst }.All(a => a is null || a.Theorem is not null)) w.WriteLine("search       none: published theorems give the winners (--search to search anyway)");
+        else w.WriteLine($"search       {r.Strategy}, {r.Nodes} nodes, {r.ElapsedMs} ms, {(r.Exact ? "exact" : "not exact (budget spent)")}");
         return w.ToString().TrimEnd();
     }
 
@@ -133,6 +139,8 @@ public static class SolveVerb
             ["line"] = a.Line is { } line ? new JsonArray(line.Select(m => (JsonNode?)JsonValue.Create(m)).ToArray()) : null,
             ["nodes"] = a.Nodes,
             ["elapsed_ms"] = a.ElapsedMs,
+            ["by"] = a.Theorem is null ? "search" : "theorem",
+            ["theorem"] = a.Theorem is { } t ? new JsonObject { ["name"] = t.Name, ["source"] = t.Source } : null,
         };
         var o = new JsonObject
         {
