@@ -407,78 +407,122 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         T oppPairs = b & (b >> 1) & _notLastColumn[s];
         T leftPairs = b & (b << 1) & _notFirstColumn[s];
         T prot = b & ~oppPairs & ~leftPairs;
-        Span<int> keys = stackalloc int[moves.Length];
+        // Per move, in generation order: cell, cheap gain, safe, verdict; the order is a sorted list of packed keys.
+        Span<int> cells = stackalloc int[moves.Length];
+        Span<int> gains = stackalloc int[moves.Length];
+        Span<bool> safeMoves = stackalloc bool[moves.Length];
+        Span<sbyte> judged = stackalloc sbyte[moves.Length];
+        Span<long> order = stackalloc long[moves.Length];
         int slot = Math.Min(ply, MaxPly - 1) * 2;
         int k1 = _killers[slot], k2 = _killers[slot + 1];
         var hist = _history[s];
         bool skipSafe = _options.SkipSafeMoves;
+        bool evaluate = _options.CountOrdering && _options.EvaluationOrdering;
         int n = 0, safeCount = 0;
+        // First pass: the moves with what they take and spend, cheap to count.
         for (T t = tops; t != T.Zero; t &= t - T.One)
         {
             int i = int.CreateTruncating(T.TrailingZeroCount(t));
             int j = i + w;
             bool safe = Bit(prot, i) && Bit(prot, j);
-            int score = 0;
-            sbyte verdict = 0;
+            int gain = 0;
             if (_options.CountOrdering)
             {
                 int oppTaken = Bit(oppPairs, i).AsInt() + Bit(oppPairs, i - 1).AsInt() + Bit(oppPairs, j).AsInt() + Bit(oppPairs, j - 1).AsInt();
                 int ownSpent = Bit(tops, i - w).AsInt() + Bit(tops, j).AsInt();
-                int gain = 2 * oppTaken - ownSpent;
-                if (_options.EvaluationOrdering)
-                {
-                    // The position the move leaves, by the same counts as the bounds.
-                    T ownBefore = _board[s], otherBefore = _board[1 - s];
-                    _board[s] &= _clearOwn[s][i];
-                    _board[1 - s] &= _clearOther[s][i];
-                    var (p1, s1, b1, v1, x1) = Counts(s);
-                    var (p2, s2, b2, v2, x2) = Counts(1 - s);
-                    _board[s] = ownBefore;
-                    _board[1 - s] = otherBefore;
-                    gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gain;
-                    if (judge)
-                    {
-                        // The very tests the child would make first (Wins), settled here without visiting it.
-                        verdict = p2 == 0 || Guaranteed(s1, b1, v1, x1, movesFirst: false) >= p2 ? (sbyte)1
-                            : Guaranteed(s2, b2, v2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
-                    }
-                }
-                score = (Math.Clamp(gain, -250, 250) + 256) << 21;
-                if (safe) score = 0;
-            }
-            if (_options.KillersAndHistory)
-            {
-                score += hist[i];
-                if (i == k1) score = int.MaxValue;
-                else if (i == k2) score = int.MaxValue - 1;
+                gain = 2 * oppTaken - ownSpent;
             }
             if (safe) safeCount++;
-            moves[n] = i;
-            keys[n] = safe && skipSafe ? int.MinValue : verdict > 0 ? int.MaxValue : score;
-            if (judge) verdicts[n] = verdict;
+            cells[n] = i;
+            gains[n] = gain;
+            safeMoves[n] = safe;
+            judged[n] = 0;
+            order[n] = Pack(Key(gain, safe, i, k1, k2, hist), n);
             n++;
         }
-        // Insertion sort, best first: lists are short and mostly ordered already.
-        for (int a = 1; a < n; a++)
+        if (evaluate)
         {
-            int m = moves[a], key = keys[a], c = a - 1;
-            sbyte v = judge ? verdicts[a] : (sbyte)0;
-            while (c >= 0 && keys[c] < key)
+            // When the bounds are applied to the children, look at them in the cheap order first:
+            // the first child the opponent loses by them ends the generation (the move wins).
+            if (judge) Sort(order, n);
+            for (int k = 0; k < n; k++)
             {
-                moves[c + 1] = moves[c];
-                keys[c + 1] = keys[c];
-                if (judge) verdicts[c + 1] = verdicts[c];
-                c--;
+                int at = Unpack(order[k]), i = cells[at];
+                // The position the move leaves, by the same counts as the bounds.
+                T ownBefore = _board[s], otherBefore = _board[1 - s];
+                _board[s] &= _clearOwn[s][i];
+                _board[1 - s] &= _clearOther[s][i];
+                var (p1, s1, b1, v1, x1) = Counts(s);
+                var (p2, s2, b2, v2, x2) = Counts(1 - s);
+                _board[s] = ownBefore;
+                _board[1 - s] = otherBefore;
+                int gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gains[at];
+                order[k] = Pack(Key(gain, safeMoves[at], i, k1, k2, hist), at);
+                if (!judge) continue;
+                // The very tests the child would make first (Wins), settled here without visiting it.
+                if (p2 == 0 || Guaranteed(s1, b1, v1, x1, movesFirst: false) >= p2)
+                {
+                    moves[0] = i;
+                    verdicts[0] = 1;
+                    return 1;
+                }
+                judged[at] = Guaranteed(s2, b2, v2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
             }
-            moves[c + 1] = m;
-            keys[c + 1] = key;
-            if (judge) verdicts[c + 1] = v;
+        }
+        if (skipSafe)
+            for (int k = 0; k < n; k++)
+            {
+                int at = Unpack(order[k]);
+                if (safeMoves[at]) order[k] = Pack(int.MinValue, at);
+            }
+        Sort(order, n);
+        for (int k = 0; k < n; k++)
+        {
+            int at = Unpack(order[k]);
+            moves[k] = cells[at];
+            if (judge) verdicts[k] = judged[at];
         }
         // The experiment of skipping safe moves: drop them (sorted last) unless nothing else is left.
         if (skipSafe && safeCount < n) n -= safeCount;
         return n;
     }
 
+    /// <summary>A sort key and the move's place in generation order in one number; equal keys keep generation order.</summary>
+    private static long Pack(int key, int at) => ((long)key << 8) | (long)(255 - at);
+
+    private static int Unpack(long packed) => 255 - (int)(packed & 255);
+
+    /// <summary>The sort key of a move: its gain, safe moves last, then history; killers first.</summary>
+    private int Key(int gain, bool safe, int i, int k1, int k2, int[] hist)
+    {
+        int score = 0;
+        if (_options.CountOrdering) score = safe ? 0 : (Math.Clamp(gain, -250, 250) + 256) << 21;
+        if (_options.KillersAndHistory)
+        {
+            score += hist[i];
+            if (i == k1) score = int.MaxValue;
+            else if (i == k2) score = int.MaxValue - 1;
+        }
+        return score;
+    }
+
+    /// <summary>Insertion sort, largest first: lists are short and mostly ordered already.</summary>
+    private static void Sort(Span<long> order, int n)
+    {
+        for (int a = 1; a < n; a++)
+        {
+            long x = order[a];
+            int c = a - 1;
+            while (c >= 0 && order[c] < x)
+            {
+                order[c + 1] = order[c];
+                c--;
+            }
+            order[c + 1] = x;
+        }
+    }
+
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     private static bool Bit(T x, int i) => i >= 0 && ((x >> i) & T.One) != T.Zero;
 }
 
@@ -486,3 +530,4 @@ internal static class BoolExtensions
 {
     public static int AsInt(this bool b) => b ? 1 : 0;
 }
+
