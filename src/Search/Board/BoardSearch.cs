@@ -530,4 +530,3 @@ internal static class BoolExtensions
 {
     public static int AsInt(this bool b) => b ? 1 : 0;
 }
-
