@@ -40,6 +40,8 @@ export class EditView {
   /** Reads typed notation: the builder takes the position apart, then everything is redrawn. */
   async load(text) {
     $('edit-text').value = text;
+    // The analysis shown is of the old position from now on, not only once the new one is drawn.
+    this.analysis.stale();
     try {
       const d = await post('/api/describe', { ruleset: this.ruleset(), position: text });
       this.shape = d.edges ? { edges: d.edges.map(e => ({ colour: e.colour, from: e.from, to: e.to })) }
