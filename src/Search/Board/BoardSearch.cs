@@ -36,11 +36,15 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     // Per side and top cell: the bits a move clears in its own view and in the other one.
     private readonly T[][] _clearOwn = new T[2][], _clearOther = new T[2][];
 
+    // Shared with the other threads of a solve that search the same tree: who is searching what.
+    private readonly BusyMarks? _busy;
+
     private readonly int[][] _history = [new int[128], new int[128]];
     private readonly int[] _killers = new int[MaxPly * 2];
 
-    public BoardSearch(BoardShape shape, OutcomeTable table, StopSignal stop, BoardSearchOptions options, Func<bool>? spent = null)
+    public BoardSearch(BoardShape shape, OutcomeTable table, StopSignal stop, BoardSearchOptions options, Func<bool>? spent = null, BusyMarks? busy = null)
     {
+        _busy = busy;
         _shape = shape;
         _table = table;
         _stop = stop;
@@ -126,7 +130,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     public void Restore(int s, int i, (T Own, T Other) saved) => Undo(s, i, saved.Own, saved.Other);
 
     /// <summary>Whether side s (0 = Left, 1 = Right), to move, wins. False also when stopped; check the stop signal.</summary>
-    public bool Wins(int s) => Wins(s, 0, boundsTried: false);
+    public bool Wins(int s) => Wins(s, 0, boundsTried: false, expectWin: true);
 
     /// <summary>The move a table entry holds for side s to move here, in this orientation, or -1.</summary>
     public int TableMove(int s, out bool win)
@@ -244,7 +248,11 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     }
 
     /// <param name="boundsTried">The parent already applied the bounds to this position while ordering its moves (they did not decide it).</param>
-    private bool Wins(int s, int ply, bool boundsTried)
+    /// <param name="expectWin">
+    /// Whether the side to move is expected to win here (the node types of common practice): the
+    /// first reply searched from an expected win is expected lost; every other reply is expected won.
+    /// </param>
+    private bool Wins(int s, int ply, bool boundsTried, bool expectWin)
     {
         Nodes++;
         if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
@@ -283,15 +291,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
         if (_options.ChildLookup)
         {
-            var d = _shape.HashDelta[s];
-            int o = (1 - s) * 4;
             for (int k = 0; k < n; k++)
             {
-                int i = moves[k], at = i * 8 + o;
-                ulong child = _hash[o] ^ d[at];
-                if (_options.Symmetry)
-                    for (int f = 1; f < 4; f++) child = Math.Min(child, _hash[o + f] ^ d[at + f]);
-                if (_table.TryGet(child, out bool replyWins, out _) && !replyWins)
+                int i = moves[k];
+                if (_table.TryGet(ChildKey(s, i), out bool replyWins, out _) && !replyWins)
                 {
                     _table.Store(key, true, _shape.MirrorMove[s][mirror][i], 1);
                     return true;
@@ -303,30 +306,66 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         int stubborn = -1;
         long stubbornWork = -1;
         T other = _board[1 - s];
-        for (int k = 0; k < n; k++)
+        // With threads sharing the tree: this node is marked while its moves are searched, and a
+        // child another thread is searching is put off until the others are done (by then it is
+        // usually in the table). The first move of an expected win is never put off: there the
+        // other thread helps inside it rather than trying the next move.
+        bool share = _busy is not null && ply < _busy.Depth;
+        int mark = share ? _busy!.Enter(key) : -1;
+        Span<int> later = share ? stackalloc int[n] : [];
+        int put = 0, tried = 0;
+        for (int pass = 0; pass < 2; pass++)
         {
-            int i = moves[k];
-            // The opponent wins there by the bounds: this move loses, nothing to search.
-            if (verdicts[k] < 0) continue;
-            long before = Nodes;
-            Play(s, i);
-            bool replyWins = Wins(1 - s, ply + 1, judged);
-            Undo(s, i, me, other);
-            if (_stop.IsSet) return false;
-            if (!replyWins)
+            int count = pass == 0 ? n : put;
+            for (int q = 0; q < count; q++)
             {
-                Reward(s, ply, i, Nodes - before);
-                _table.Store(key, true, _shape.MirrorMove[s][mirror][i], Nodes - start);
-                return true;
-            }
-            if (Nodes - before > stubbornWork)
-            {
-                stubbornWork = Nodes - before;
-                stubborn = i;
+                int k = pass == 0 ? q : later[q];
+                int i = moves[k];
+                // The opponent wins there by the bounds: this move loses, nothing to search.
+                if (verdicts[k] < 0) continue;
+                if (pass == 0 && share && (tried > 0 || !expectWin) && _busy!.IsBusy(ChildKey(s, i)))
+                {
+                    later[put++] = k;
+                    continue;
+                }
+                long before = Nodes;
+                Play(s, i);
+                bool replyWins = Wins(1 - s, ply + 1, judged, expectWin: !expectWin || tried > 0);
+                Undo(s, i, me, other);
+                tried++;
+                if (_stop.IsSet)
+                {
+                    if (share) _busy!.Leave(mark);
+                    return false;
+                }
+                if (!replyWins)
+                {
+                    if (share) _busy!.Leave(mark);
+                    Reward(s, ply, i, Nodes - before);
+                    _table.Store(key, true, _shape.MirrorMove[s][mirror][i], Nodes - start);
+                    return true;
+                }
+                if (Nodes - before > stubbornWork)
+                {
+                    stubbornWork = Nodes - before;
+                    stubborn = i;
+                }
             }
         }
+        if (share) _busy!.Leave(mark);
         _table.Store(key, false, stubborn < 0 ? OutcomeTable.NoMove : _shape.MirrorMove[s][mirror][stubborn], Nodes - start);
         return false;
+    }
+
+    /// <summary>The table key of the position after side s plays top cell i (from the incremental hashes, without playing it).</summary>
+    private ulong ChildKey(int s, int i)
+    {
+        var d = _shape.HashDelta[s];
+        int o = (1 - s) * 4, at = i * 8 + o;
+        ulong child = _hash[o] ^ d[at];
+        if (_options.Symmetry)
+            for (int f = 1; f < 4; f++) child = Math.Min(child, _hash[o + f] ^ d[at + f]);
+        return child;
     }
 
     /// <summary>Score of a proven win in the depth-limited search (minus the plies to reach it).</summary>

@@ -87,6 +87,16 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool SplitBelowRoot { get; init; }
 
+    /// <summary>
+    /// With more than one thread, let them all search the whole tree from the root, each putting
+    /// off the moves another is searching (<see cref="BusyMarks"/>), rather than sharing out the
+    /// root moves. Work is shared at every depth down to <see cref="ShareDepth"/>.
+    /// </summary>
+    public bool ShareTree { get; init; }
+
+    /// <summary>Plies from the root within which threads sharing the tree mark and put off moves.</summary>
+    public int ShareDepth { get; init; } = 24;
+
     /// <summary>Threads searching the root moves (sharing the table).</summary>
     public int Threads { get; init; } = 1;
 }

@@ -167,6 +167,8 @@ public sealed class WholeBoard
         var rootMoves = main.OrderedMoves(s);
         if (rootMoves.Length == 0) return new BoardAnswer(false, null, 1, clock.ElapsedMilliseconds, [], 0, 0);
 
+        if (Options.Threads > 1 && Options.ShareTree)
+            return RunShared<T>(shape, table, empty, s, rootMoves, spent, clock);
         if (Options.Threads > 1 && Options.SplitBelowRoot)
             return RunSplit<T>(shape, table, empty, s, rootMoves, spent, clock);
 
@@ -216,6 +218,57 @@ public sealed class WholeBoard
         long nodes = searchers.Sum(x => x.Nodes);
         bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
         return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
+    }
+
+    /// <summary>
+    /// All threads search the whole tree from the root at once, sharing the table; each puts off the
+    /// moves another is searching (<see cref="BusyMarks"/>), so the work spreads out at every
+    /// depth, not only over the root moves. The first thread to settle the root gives the answer.
+    /// </summary>
+    private BoardAnswer RunShared<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent, Stopwatch clock)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        int threads = Options.Threads;
+        var stop = new StopSignal();
+        var busy = new BusyMarks(Options.ShareDepth);
+        var searchers = new BoardSearch<T>[threads];
+        for (int t = 0; t < threads; t++)
+        {
+            searchers[t] = new BoardSearch<T>(shape, table, stop, Options, spent, busy);
+            searchers[t].SetPosition(empty);
+        }
+        _liveNodes = () => searchers.Sum(x => x.Nodes);
+        _liveClock = clock;
+        _liveMoves = rootMoves;
+        _liveSide = s;
+        int settled = 0;
+        bool result = false;
+
+        void Worker(int t)
+        {
+            bool wins = searchers[t].Wins(s);
+            // The first thread back with an answer gives it and stops the others.
+            if (stop.IsSet) return;
+            if (Interlocked.CompareExchange(ref settled, 1, 0) == 0)
+            {
+                result = wins;
+                stop.Set();
+            }
+        }
+
+        RunThreads(threads, Worker);
+        _liveNodes = null;
+        long nodes = searchers.Sum(x => x.Nodes);
+        var work = new long[rootMoves.Length];
+        if (settled == 0)
+            return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, 0);
+        // The move the table holds for the root: the winning one, or the most stubborn defence.
+        var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
+        reader.SetPosition(empty);
+        int stored = reader.TableMove(s, out _);
+        int at = Math.Max(0, Array.IndexOf(rootMoves, stored));
+        if (!result) work[at] = 1;
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, result, result ? at : -1, work, nodes, rootMoves.Length);
     }
 
     /// <summary>Runs the worker on that many threads at once and waits for them all.</summary>
