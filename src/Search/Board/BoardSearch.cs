@@ -69,6 +69,11 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
     }
 
+    /// <summary>The root move (top cell) this instance is searching, or -1; for progress reports.</summary>
+    public int RootMove => Volatile.Read(ref _rootMove);
+
+    private int _rootMove = -1;
+
     /// <summary>Nodes visited by this instance.</summary>
     public long Nodes { get; private set; }
 
@@ -329,6 +334,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                     continue;
                 }
                 long before = Nodes;
+                if (ply == 0) Volatile.Write(ref _rootMove, i);
                 Play(s, i);
                 bool replyWins = Wins(1 - s, ply + 1, judged, expectWin: !expectWin || tried > 0);
                 Undo(s, i, me, other);

@@ -1,3 +1,5 @@
+using System.Numerics;
+
 namespace Bramble.Search.Board;
 
 /// <summary>
@@ -96,11 +98,14 @@ public sealed class OutcomeTable
         foreach (ulong x in _words) w.Write(x);
     }
 
-    /// <summary>Reads a table written by <see cref="Save"/> into this one (same size only).</summary>
-    public void Load(BinaryReader r)
+    /// <summary>Reads a table written by <see cref="Save"/>, at the size it was saved with.</summary>
+    public static OutcomeTable Read(BinaryReader r)
     {
         int n = r.ReadInt32();
-        if (n != _words.Length) throw new InvalidDataException($"the saved table has {n / 4} buckets, this one {_words.Length / 4}");
-        for (int i = 0; i < n; i++) _words[i] = r.ReadUInt64();
+        int log2 = BitOperations.Log2((uint)Math.Max(n, 1) / 4);
+        if (n < 64 || n != 4 << log2 || log2 > 30) throw new InvalidDataException($"the saved table's size ({n} words) is not a power-of-two number of buckets");
+        var table = new OutcomeTable(log2);
+        for (int i = 0; i < n; i++) table._words[i] = r.ReadUInt64();
+        return table;
     }
 }
