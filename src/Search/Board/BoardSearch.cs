@@ -440,7 +440,9 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     /// <summary>
     /// As <see cref="Generate(int, int, Span{int})"/>; when <paramref name="verdicts"/> has room and
     /// the evaluation ordering has computed the counts after a move anyway, also the safe-move
-    /// bounds of the child: +1 when the opponent, to move there, loses by them, −1 when it wins.
+    /// bounds of the child: +1 when the opponent, to move there, loses by them (then that move
+    /// alone is returned), 0 when they leave it open. Moves after which the opponent wins by them
+    /// are left out of the list (−1 only with the skip-safe-moves experiment, which keeps them).
     /// </summary>
     private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts)
     {
@@ -489,7 +491,9 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         {
             // When the bounds are applied to the children, look at them in the cheap order first:
             // the first child the opponent loses by them ends the generation (the move wins).
-            if (judge) Sort(order, n);
+            // Only the first few places of the cheap order matter: a child the bounds settle is
+            // nearly always among them, and when none is, every child is counted anyway.
+            if (judge) SelectFirst(order, n, 4);
             for (int k = 0; k < n; k++)
             {
                 int at = Unpack(order[k]), i = cells[at];
@@ -513,6 +517,15 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 }
                 judged[at] = Guaranteed(s2, b2, v2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
             }
+        }
+        if (judge && !skipSafe)
+        {
+            // A move after which the opponent wins by the bounds is never searched nor looked up:
+            // leave it out, so the sort and the child lookups see only the moves left open.
+            int open = 0;
+            for (int k = 0; k < n; k++)
+                if (judged[Unpack(order[k])] >= 0) order[open++] = order[k];
+            n = open;
         }
         if (skipSafe)
             for (int k = 0; k < n; k++)
@@ -549,6 +562,18 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             else if (i == k2) score = int.MaxValue - 1;
         }
         return score;
+    }
+
+    /// <summary>Moves the <paramref name="places"/> largest entries to the front, largest first; the rest stay in any order.</summary>
+    private static void SelectFirst(Span<long> order, int n, int places)
+    {
+        for (int a = 0; a < Math.Min(places, n - 1); a++)
+        {
+            int best = a;
+            for (int c = a + 1; c < n; c++)
+                if (order[c] > order[best]) best = c;
+            (order[a], order[best]) = (order[best], order[a]);
+        }
     }
 
     /// <summary>Insertion sort, largest first: lists are short and mostly ordered already.</summary>
