@@ -20,7 +20,7 @@ public static class BoardAblation
         string? only = null;
         int threads = 1;
         int capSeconds = 600;
-        int log2 = 22;
+        int? log2 = null;
         Side[] sides = [Side.Left, Side.Right];
         for (int i = 0; i < args.Length; i++)
         {
@@ -45,7 +45,10 @@ public static class BoardAblation
             ("no-block-margin", all with { BlockMargin = false }),
             ("no-lone-spares", all with { LoneSpares = false }),
             ("no-child-bounds", all with { ChildBounds = false }),
-            ("split-below-root", all with { SplitBelowRoot = true }),
+            ("split-below-root", all with { SplitBelowRoot = true, ShareTree = false }),
+            ("root-moves", all with { ShareTree = false }),
+            ("share-tree-16", all with { ShareTree = true, ShareDepth = 16 }),
+            ("share-tree-32", all with { ShareTree = true, ShareDepth = 32 }),
             ("skip-safe", all with { SkipSafeMoves = true }),
             ("region-leaves", all with { RegionLeaves = true }),
             ("region-leaves-8", all with { RegionLeaves = true, RegionLeafCells = 8 }),

@@ -73,11 +73,19 @@ public class WholeBoardTests
         AgreesWithPlainSearch(new BoardSearchOptions { SafeMoveBounds = false, Symmetry = false }, 1904, 500);
 
     [Fact]
-    public void TwoThreadsAgreeWithPlainSearch() => AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2 }, 1905, 300);
+    public void TwoThreadsOnTheRootMovesAgreeWithPlainSearch() => AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, ShareTree = false }, 1905, 300);
 
     [Fact]
     public void TwoThreadsOnTheRepliesAgreeWithPlainSearch() =>
-        AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, SplitBelowRoot = true }, 1911, 300);
+        AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, SplitBelowRoot = true, ShareTree = false }, 1911, 300);
+
+    [Fact]
+    public void ThreadsSharingTheTreeAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, ShareTree = true }, 1913, 300);
+
+    [Fact]
+    public void ThreadsSharingTheTreeToAFewPliesAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { Threads = 3, ShareTree = true, ShareDepth = 3 }, 1914, 300);
 
     [Fact]
     public void SkippingSafeMovesAgreesWithPlainSearch() =>
@@ -225,5 +233,48 @@ public class WholeBoardTests
         Assert.True(d.Exact);
         Assert.True(d.Winning);
         Assert.Equal(position.FormatMove(d.Move!.Value), d.Line![0]);
+    }
+
+    [Fact]
+    public void ASavedTableResumesASolveAtTheSizeItWasWrittenWith()
+    {
+        var position = (DomineeringPosition)Rules.Parse("5x5");
+        var first = new WholeBoard(new BoardSearchOptions { TableLog2 = 14 });
+        var fresh = first.Solve(position, Side.Left);
+        using var file = new MemoryStream();
+        first.SaveTable(file);
+        file.Position = 0;
+        // A solver that would pick another size reads the table back at the saved one.
+        var second = new WholeBoard(new BoardSearchOptions { TableLog2 = 18 });
+        second.LoadTable(file);
+        Assert.Equal(1L << 14, second.Table!.Buckets);
+        var resumed = second.Solve(position, Side.Left);
+        // 5×5 is a second-player win (as above); the resumed solve finds the root in the table.
+        Assert.False(fresh.Win);
+        Assert.Equal(fresh.Win, resumed.Win);
+        Assert.True(resumed.Nodes < fresh.Nodes, $"resumed {resumed.Nodes} nodes, fresh {fresh.Nodes}");
+    }
+
+    [Fact]
+    public void ATableFileOfAnotherKindIsRefusedWithWhatItStartsWith()
+    {
+        using var file = new MemoryStream();
+        using (var w = new BinaryWriter(file, System.Text.Encoding.UTF8, leaveOpen: true)) w.Write("orchard-ledger/2");
+        file.Position = 0;
+        var e = Assert.Throws<InvalidDataException>(() => new WholeBoard().LoadTable(file));
+        Assert.Contains("orchard-ledger/2", e.Message);
+    }
+
+    [Fact]
+    public void TheTableGrowsWithTheBoardAndStaysWithinTheMemory()
+    {
+        int previous = 0;
+        for (int cells = 4; cells <= 128; cells += 4)
+        {
+            int log2 = WholeBoard.TableLog2For(cells);
+            Assert.True(log2 >= previous, $"{cells} cells: 2^{log2} buckets after 2^{previous}");
+            Assert.True(log2 == 16 || (32L << log2) <= GC.GetGCMemoryInfo().TotalAvailableMemoryBytes / 8);
+            previous = log2;
+        }
     }
 }

@@ -36,11 +36,15 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     // Per side and top cell: the bits a move clears in its own view and in the other one.
     private readonly T[][] _clearOwn = new T[2][], _clearOther = new T[2][];
 
+    // Shared with the other threads of a solve that search the same tree: who is searching what.
+    private readonly BusyMarks? _busy;
+
     private readonly int[][] _history = [new int[128], new int[128]];
     private readonly int[] _killers = new int[MaxPly * 2];
 
-    public BoardSearch(BoardShape shape, OutcomeTable table, StopSignal stop, BoardSearchOptions options, Func<bool>? spent = null)
+    public BoardSearch(BoardShape shape, OutcomeTable table, StopSignal stop, BoardSearchOptions options, Func<bool>? spent = null, BusyMarks? busy = null)
     {
+        _busy = busy;
         _shape = shape;
         _table = table;
         _stop = stop;
@@ -64,6 +68,11 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             _ = h;
         }
     }
+
+    /// <summary>The root move (top cell) this instance is searching, or -1; for progress reports.</summary>
+    public int RootMove => Volatile.Read(ref _rootMove);
+
+    private int _rootMove = -1;
 
     /// <summary>Nodes visited by this instance.</summary>
     public long Nodes { get; private set; }
@@ -126,7 +135,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     public void Restore(int s, int i, (T Own, T Other) saved) => Undo(s, i, saved.Own, saved.Other);
 
     /// <summary>Whether side s (0 = Left, 1 = Right), to move, wins. False also when stopped; check the stop signal.</summary>
-    public bool Wins(int s) => Wins(s, 0, boundsTried: false);
+    public bool Wins(int s) => Wins(s, 0, boundsTried: false, expectWin: true);
 
     /// <summary>The move a table entry holds for side s to move here, in this orientation, or -1.</summary>
     public int TableMove(int s, out bool win)
@@ -244,7 +253,11 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     }
 
     /// <param name="boundsTried">The parent already applied the bounds to this position while ordering its moves (they did not decide it).</param>
-    private bool Wins(int s, int ply, bool boundsTried)
+    /// <param name="expectWin">
+    /// Whether the side to move is expected to win here (the node types of common practice): the
+    /// first reply searched from an expected win is expected lost; every other reply is expected won.
+    /// </param>
+    private bool Wins(int s, int ply, bool boundsTried, bool expectWin)
     {
         Nodes++;
         if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
@@ -283,15 +296,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
         if (_options.ChildLookup)
         {
-            var d = _shape.HashDelta[s];
-            int o = (1 - s) * 4;
             for (int k = 0; k < n; k++)
             {
-                int i = moves[k], at = i * 8 + o;
-                ulong child = _hash[o] ^ d[at];
-                if (_options.Symmetry)
-                    for (int f = 1; f < 4; f++) child = Math.Min(child, _hash[o + f] ^ d[at + f]);
-                if (_table.TryGet(child, out bool replyWins, out _) && !replyWins)
+                int i = moves[k];
+                if (_table.TryGet(ChildKey(s, i), out bool replyWins, out _) && !replyWins)
                 {
                     _table.Store(key, true, _shape.MirrorMove[s][mirror][i], 1);
                     return true;
@@ -303,30 +311,67 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         int stubborn = -1;
         long stubbornWork = -1;
         T other = _board[1 - s];
-        for (int k = 0; k < n; k++)
+        // With threads sharing the tree: this node is marked while its moves are searched, and a
+        // child another thread is searching is put off until the others are done (by then it is
+        // usually in the table). The first move of an expected win is never put off: there the
+        // other thread helps inside it rather than trying the next move.
+        bool share = _busy is not null && ply < _busy.Depth;
+        int mark = share ? _busy!.Enter(key) : -1;
+        Span<int> later = share ? stackalloc int[n] : [];
+        int put = 0, tried = 0;
+        for (int pass = 0; pass < 2; pass++)
         {
-            int i = moves[k];
-            // The opponent wins there by the bounds: this move loses, nothing to search.
-            if (verdicts[k] < 0) continue;
-            long before = Nodes;
-            Play(s, i);
-            bool replyWins = Wins(1 - s, ply + 1, judged);
-            Undo(s, i, me, other);
-            if (_stop.IsSet) return false;
-            if (!replyWins)
+            int count = pass == 0 ? n : put;
+            for (int q = 0; q < count; q++)
             {
-                Reward(s, ply, i, Nodes - before);
-                _table.Store(key, true, _shape.MirrorMove[s][mirror][i], Nodes - start);
-                return true;
-            }
-            if (Nodes - before > stubbornWork)
-            {
-                stubbornWork = Nodes - before;
-                stubborn = i;
+                int k = pass == 0 ? q : later[q];
+                int i = moves[k];
+                // The opponent wins there by the bounds: this move loses, nothing to search.
+                if (verdicts[k] < 0) continue;
+                if (pass == 0 && share && (tried > 0 || !expectWin) && _busy!.IsBusy(ChildKey(s, i)))
+                {
+                    later[put++] = k;
+                    continue;
+                }
+                long before = Nodes;
+                if (ply == 0) Volatile.Write(ref _rootMove, i);
+                Play(s, i);
+                bool replyWins = Wins(1 - s, ply + 1, judged, expectWin: !expectWin || tried > 0);
+                Undo(s, i, me, other);
+                tried++;
+                if (_stop.IsSet)
+                {
+                    if (share) _busy!.Leave(mark);
+                    return false;
+                }
+                if (!replyWins)
+                {
+                    if (share) _busy!.Leave(mark);
+                    Reward(s, ply, i, Nodes - before);
+                    _table.Store(key, true, _shape.MirrorMove[s][mirror][i], Nodes - start);
+                    return true;
+                }
+                if (Nodes - before > stubbornWork)
+                {
+                    stubbornWork = Nodes - before;
+                    stubborn = i;
+                }
             }
         }
+        if (share) _busy!.Leave(mark);
         _table.Store(key, false, stubborn < 0 ? OutcomeTable.NoMove : _shape.MirrorMove[s][mirror][stubborn], Nodes - start);
         return false;
+    }
+
+    /// <summary>The table key of the position after side s plays top cell i (from the incremental hashes, without playing it).</summary>
+    private ulong ChildKey(int s, int i)
+    {
+        var d = _shape.HashDelta[s];
+        int o = (1 - s) * 4, at = i * 8 + o;
+        ulong child = _hash[o] ^ d[at];
+        if (_options.Symmetry)
+            for (int f = 1; f < 4; f++) child = Math.Min(child, _hash[o + f] ^ d[at + f]);
+        return child;
     }
 
     /// <summary>Score of a proven win in the depth-limited search (minus the plies to reach it).</summary>
@@ -395,7 +440,9 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     /// <summary>
     /// As <see cref="Generate(int, int, Span{int})"/>; when <paramref name="verdicts"/> has room and
     /// the evaluation ordering has computed the counts after a move anyway, also the safe-move
-    /// bounds of the child: +1 when the opponent, to move there, loses by them, −1 when it wins.
+    /// bounds of the child: +1 when the opponent, to move there, loses by them (then that move
+    /// alone is returned), 0 when they leave it open. Moves after which the opponent wins by them
+    /// are left out of the list (−1 only with the skip-safe-moves experiment, which keeps them).
     /// </summary>
     private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts)
     {
@@ -444,7 +491,9 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         {
             // When the bounds are applied to the children, look at them in the cheap order first:
             // the first child the opponent loses by them ends the generation (the move wins).
-            if (judge) Sort(order, n);
+            // Only the first few places of the cheap order matter: a child the bounds settle is
+            // nearly always among them, and when none is, every child is counted anyway.
+            if (judge) SelectFirst(order, n, 4);
             for (int k = 0; k < n; k++)
             {
                 int at = Unpack(order[k]), i = cells[at];
@@ -468,6 +517,15 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 }
                 judged[at] = Guaranteed(s2, b2, v2, x2, movesFirst: true) > p1 ? (sbyte)-1 : (sbyte)0;
             }
+        }
+        if (judge && !skipSafe)
+        {
+            // A move after which the opponent wins by the bounds is never searched nor looked up:
+            // leave it out, so the sort and the child lookups see only the moves left open.
+            int open = 0;
+            for (int k = 0; k < n; k++)
+                if (judged[Unpack(order[k])] >= 0) order[open++] = order[k];
+            n = open;
         }
         if (skipSafe)
             for (int k = 0; k < n; k++)
@@ -504,6 +562,18 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             else if (i == k2) score = int.MaxValue - 1;
         }
         return score;
+    }
+
+    /// <summary>Moves the <paramref name="places"/> largest entries to the front, largest first; the rest stay in any order.</summary>
+    private static void SelectFirst(Span<long> order, int n, int places)
+    {
+        for (int a = 0; a < Math.Min(places, n - 1); a++)
+        {
+            int best = a;
+            for (int c = a + 1; c < n; c++)
+                if (order[c] > order[best]) best = c;
+            (order[a], order[best]) = (order[best], order[a]);
+        }
     }
 
     /// <summary>Insertion sort, largest first: lists are short and mostly ordered already.</summary>

@@ -77,8 +77,11 @@ public sealed record BoardSearchOptions
     /// <summary>The most cells of a region both sides can move in, for <see cref="RegionLeaves"/>.</summary>
     public int RegionLeafCells { get; init; } = 12;
 
-    /// <summary>Buckets of the transposition table as a power of two (32 bytes each).</summary>
-    public int TableLog2 { get; init; } = 21;
+    /// <summary>
+    /// Buckets of the transposition table as a power of two (32 bytes each); null sizes it by the
+    /// board (<see cref="WholeBoard.TableLog2For"/>).
+    /// </summary>
+    public int? TableLog2 { get; init; }
 
     /// <summary>
     /// With more than one thread, share out the opponent's replies to one root move at a time
@@ -86,6 +89,17 @@ public sealed record BoardSearchOptions
     /// saved nodes on 7×7 but cost them when the side to move loses (bench/README.md).
     /// </summary>
     public bool SplitBelowRoot { get; init; }
+
+    /// <summary>
+    /// With more than one thread, let them all search the whole tree from the root, each putting
+    /// off the moves another is searching (<see cref="BusyMarks"/>), rather than sharing out the
+    /// root moves. Work is shared at every depth down to <see cref="ShareDepth"/>. On by default:
+    /// on 8×8 it measured faster than sharing out the root moves or the replies (bench/README.md).
+    /// </summary>
+    public bool ShareTree { get; init; } = true;
+
+    /// <summary>Plies from the root within which threads sharing the tree mark and put off moves.</summary>
+    public int ShareDepth { get; init; } = 24;
 
     /// <summary>Threads searching the root moves (sharing the table).</summary>
     public int Threads { get; init; } = 1;

@@ -36,9 +36,24 @@ public sealed class WholeBoard
     private int _liveRoot = -1;
     private int[]? _liveMoves;
     private int _liveSide;
+    private Func<int>? _liveRootCell;
 
     /// <summary>The table of the last shape solved (for saving and resuming).</summary>
     public OutcomeTable? Table => _table;
+
+    /// <summary>
+    /// The table size picked for a board of that many cells: bigger boards search more positions
+    /// (8×8 took 13% fewer nodes with 2^26 buckets than with 2^24, bench/README.md), so from 2^16
+    /// buckets (2 MiB) for small boards up to 2^24 (512 MiB) for 64 cells and 2^25 above, but never
+    /// more than an eighth of the memory the process may use.
+    /// </summary>
+    public static int TableLog2For(int cells)
+    {
+        int log2 = cells <= 30 ? 16 : cells <= 42 ? 19 : cells <= 49 ? 21 : cells <= 56 ? 22 : cells <= 64 ? 24 : 25;
+        long available = GC.GetGCMemoryInfo().TotalAvailableMemoryBytes;
+        while (log2 > 16 && (32L << log2) > available / 8) log2--;
+        return log2;
+    }
 
     /// <summary>Whether the board fits the bitboards (at most 128 cells).</summary>
     public static bool Fits(Rules.Domineering.Board board) => board.Rows * board.Columns <= 128;
@@ -50,7 +65,7 @@ public sealed class WholeBoard
         if (_shape is null || _shape.Rows != board.Rows || _shape.Columns != board.Columns)
         {
             _shape = new BoardShape(board.Rows, board.Columns);
-            _table = new OutcomeTable(Options.TableLog2);
+            _table = new OutcomeTable(Options.TableLog2 ?? TableLog2For(_shape.Cells));
         }
         var empty = new bool[_shape.Cells];
         for (int r = 0; r < board.Rows; r++)
@@ -73,7 +88,7 @@ public sealed class WholeBoard
         if (!ReferenceEquals(shape, _shape))
         {
             _shape = shape;
-            _table = new OutcomeTable(Options.TableLog2);
+            _table = new OutcomeTable(Options.TableLog2 ?? TableLog2For(shape.Cells));
         }
         var empty = new bool[shape.Cells];
         for (int r = 0; r < board.Rows; r++)
@@ -125,7 +140,8 @@ public sealed class WholeBoard
         {
             var (nodes, clock, moves, shape) = (_liveNodes, _liveClock, _liveMoves, _shape);
             if (nodes is null || clock is null || moves is null || shape is null) return null;
-            int k = Math.Clamp(Volatile.Read(ref _liveRoot), 0, moves.Length - 1);
+            int k = _liveRootCell is { } cell ? Array.IndexOf(moves, cell()) : Volatile.Read(ref _liveRoot);
+            k = Math.Clamp(k, 0, moves.Length - 1);
             return new BoardProgress(nodes(), clock.ElapsedMilliseconds, k, moves.Length, ToMove(shape, _liveSide, moves[k]));
         }
     }
@@ -151,8 +167,8 @@ public sealed class WholeBoard
         if (magic != TableMagic) throw new InvalidDataException($"not a saved board table (it starts with '{magic}')");
         int rows = r.ReadInt32(), columns = r.ReadInt32();
         var shape = new BoardShape(rows, columns);
-        var table = new OutcomeTable(Options.TableLog2);
-        table.Load(r);
+        // The table comes back at the size it was saved with, whatever this solver would pick.
+        var table = OutcomeTable.Read(r);
         (_shape, _table) = (shape, table);
     }
 
@@ -169,6 +185,8 @@ public sealed class WholeBoard
 
         if (Options.Threads > 1 && Options.SplitBelowRoot)
             return RunSplit<T>(shape, table, empty, s, rootMoves, spent, clock);
+        if (Options.Threads > 1 && Options.ShareTree)
+            return RunShared<T>(shape, table, empty, s, rootMoves, spent, clock);
 
         int threads = Math.Clamp(Options.Threads, 1, rootMoves.Length);
         var searchers = new BoardSearch<T>[threads];
@@ -216,6 +234,59 @@ public sealed class WholeBoard
         long nodes = searchers.Sum(x => x.Nodes);
         bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
         return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
+    }
+
+    /// <summary>
+    /// All threads search the whole tree from the root at once, sharing the table; each puts off the
+    /// moves another is searching (<see cref="BusyMarks"/>), so the work spreads out at every
+    /// depth, not only over the root moves. The first thread to settle the root gives the answer.
+    /// </summary>
+    private BoardAnswer RunShared<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent, Stopwatch clock)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        int threads = Options.Threads;
+        var stop = new StopSignal();
+        var busy = new BusyMarks(Options.ShareDepth);
+        var searchers = new BoardSearch<T>[threads];
+        for (int t = 0; t < threads; t++)
+        {
+            searchers[t] = new BoardSearch<T>(shape, table, stop, Options, spent, busy);
+            searchers[t].SetPosition(empty);
+        }
+        _liveNodes = () => searchers.Sum(x => x.Nodes);
+        _liveClock = clock;
+        _liveMoves = rootMoves;
+        _liveSide = s;
+        _liveRootCell = () => searchers[0].RootMove;
+        int settled = 0;
+        bool result = false;
+
+        void Worker(int t)
+        {
+            bool wins = searchers[t].Wins(s);
+            // The first thread back with an answer gives it and stops the others.
+            if (stop.IsSet) return;
+            if (Interlocked.CompareExchange(ref settled, 1, 0) == 0)
+            {
+                result = wins;
+                stop.Set();
+            }
+        }
+
+        RunThreads(threads, Worker);
+        _liveNodes = null;
+        _liveRootCell = null;
+        long nodes = searchers.Sum(x => x.Nodes);
+        var work = new long[rootMoves.Length];
+        if (settled == 0)
+            return new BoardAnswer(null, null, nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, 0);
+        // The move the table holds for the root: the winning one, or the most stubborn defence.
+        var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
+        reader.SetPosition(empty);
+        int stored = reader.TableMove(s, out _);
+        int at = Math.Max(0, Array.IndexOf(rootMoves, stored));
+        if (!result) work[at] = 1;
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, result, result ? at : -1, work, nodes, rootMoves.Length);
     }
 
     /// <summary>Runs the worker on that many threads at once and waits for them all.</summary>
