@@ -130,7 +130,8 @@ public sealed unsafe class OutcomeTable
     /// <summary>Writes the table (for resuming a long solve).</summary>
     public void Save(BinaryWriter w)
     {
-        // The word count is written as an int: at most 2^30 buckets, 2^32 words, fits as before.
+        // The word count is written as an int, as before: tables of up to 2^28 buckets (8 GiB).
+        if (_length > int.MaxValue) throw new InvalidOperationException($"a table of {Buckets} buckets is too big to save (at most 2^28)");
         w.Write((int)_length);
         for (long i = 0; i < _length; i++) w.Write(_words[i]);
     }
@@ -140,7 +141,7 @@ public sealed unsafe class OutcomeTable
     {
         int n = r.ReadInt32();
         int log2 = BitOperations.Log2((uint)Math.Max(n, 1) / 4);
-        if (n < 64 || n != 4 << log2 || log2 > 30) throw new InvalidDataException($"the saved table's size ({n} words) is not a power-of-two number of buckets");
+        if (n < 64 || log2 > 28 || n != 4 << log2) throw new InvalidDataException($"the saved table's size ({n} words) is not a power-of-two number of buckets");
         var table = new OutcomeTable(log2);
         for (int i = 0; i < n; i++) table._words[i] = r.ReadUInt64();
         return table;
