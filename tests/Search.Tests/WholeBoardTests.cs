@@ -266,6 +266,22 @@ public class WholeBoardTests
     }
 
     [Fact]
+    public void ATableFileOfAnEarlierLayoutIsRefusedWithWhatToDo()
+    {
+        using var file = new MemoryStream();
+        using (var w = new BinaryWriter(file, System.Text.Encoding.UTF8, leaveOpen: true))
+        {
+            w.Write("bramble-board-table/1");
+            w.Write(4);
+            w.Write(4);
+        }
+        file.Position = 0;
+        var e = Assert.Throws<InvalidDataException>(() => new WholeBoard().LoadTable(file));
+        Assert.Contains("earlier version", e.Message);
+        Assert.Contains("solve again", e.Message);
+    }
+
+    [Fact]
     public void TheTableGrowsWithTheBoardAndStaysWithinTheMemory()
     {
         int previous = 0;

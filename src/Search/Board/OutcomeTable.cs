@@ -4,27 +4,29 @@ using System.Numerics;
 namespace Bramble.Search.Board;
 
 /// <summary>
-/// The transposition table of the whole-board search: a fixed array of two-entry buckets, each
-/// entry two 64-bit words, so it never grows, never allocates after construction and is never
-/// cleared when full. Entries hold exact outcomes (the side to move wins or loses), which are
-/// valid at any depth, so no bound or depth bookkeeping is needed.
+/// The transposition table of the whole-board search: a fixed array of four-entry buckets of 32
+/// bytes, so it never grows, never allocates after construction and is never cleared when full.
+/// Entries hold exact outcomes (the side to move wins or loses), which are valid at any depth, so
+/// no bound or depth bookkeeping is needed.
 /// <para>
-/// Entry layout (16 bytes): word 0 = key XOR word 1; word 1 = bit 0 win, bits 1–8 the move (top
-/// cell in the table's mirror orientation, 255 = none), bits 16–63 the work (nodes of the subtree
-/// that settled it). The key is stored XORed with the data so that two threads writing one entry
-/// at once leave a pair that no longer matches its key and reads as a miss, without locks
-/// (lockless hashing, common practice in chess programs).
+/// An entry is one 64-bit word: bits 16–63 are the same bits of the key (the bucket is picked by
+/// the low bits, so together they check the whole key on tables of at least 2^16 buckets); bit 0
+/// win, bits 1–8 the move (top cell in the table's mirror orientation, 255 = none), bits 9–14 the
+/// work as a power of two (the nodes of the subtree that settled it), bit 15 always set, so that
+/// no entry is the empty word 0. A word is read and written whole, so two threads writing one slot
+/// at once leave one of the two entries, never a mix, without locks.
 /// </para>
 /// <para>
 /// Replacement, after the schemes compared by Breuker, Uiterwijk and van den Herik, "Solving 8×8
-/// Domineering", TCS 230 (2000): slot 0 of a bucket keeps the entry with the most work (a new
-/// entry with more work pushes the old one down into slot 1), slot 1 is always replaced — so the
+/// Domineering", TCS 230 (2000): a position already in the bucket is overwritten in place;
+/// otherwise a new entry takes an empty slot or the slot whose entry cost the least work, so the
 /// expensive results survive and the recent cheap ones still get a place.
 /// </para>
 /// <para>
 /// The words live in native memory aligned to 2 MiB and, on Linux, marked for transparent huge
 /// pages: a probe lands anywhere in hundreds of MiB, and with 4 KiB pages nearly every probe
-/// would also miss the address translation cache (common practice in chess programs).
+/// would also miss the address translation cache (common practice in chess programs). A bucket
+/// is half a cache line, so a probe costs one memory access.
 /// </para>
 /// </summary>
 public sealed unsafe class OutcomeTable
@@ -32,6 +34,9 @@ public sealed unsafe class OutcomeTable
     public const int NoMove = 255;
 
     private const nuint HugePage = 2 << 20;
+    private const int Ways = 4;
+    private const ulong CheckBits = ~0xFFFFUL;
+    private const ulong Used = 1UL << 15;
 
     private readonly ulong* _words;
     private readonly long _length;
@@ -41,7 +46,7 @@ public sealed unsafe class OutcomeTable
     public OutcomeTable(int log2Buckets = 21)
     {
         if (log2Buckets < 4 || log2Buckets > 30) throw new ArgumentOutOfRangeException(nameof(log2Buckets));
-        _length = (1L << log2Buckets) * 4;
+        _length = (1L << log2Buckets) * Ways;
         _mask = (1UL << log2Buckets) - 1;
         nuint bytes = (nuint)_length * sizeof(ulong);
         _words = (ulong*)NativeMemory.AlignedAlloc(bytes, Math.Min(bytes, HugePage));
@@ -72,20 +77,20 @@ public sealed unsafe class OutcomeTable
         catch (EntryPointNotFoundException) { }
     }
 
-    public long Buckets => _length / 4;
+    public long Buckets => _length / Ways;
 
     /// <summary>Looks up a key; on a hit gives whether the side to move wins and the stored move.</summary>
     public bool TryGet(ulong key, out bool win, out int move)
     {
-        ulong* b = _words + (long)(key & _mask) * 4;
-        for (int slot = 0; slot < 2; slot++)
+        ulong* b = _words + (long)(key & _mask) * Ways;
+        ulong check = key & CheckBits;
+        for (int slot = 0; slot < Ways; slot++)
         {
-            ulong check = Volatile.Read(ref b[slot * 2]);
-            ulong data = Volatile.Read(ref b[slot * 2 + 1]);
-            if ((check ^ data) == key && data != 0)
+            ulong e = Volatile.Read(ref b[slot]);
+            if ((e & CheckBits) == check && e != 0)
             {
-                win = (data & 1) != 0;
-                move = (int)((data >> 1) & 0xFF);
+                win = (e & 1) != 0;
+                move = (int)((e >> 1) & 0xFF);
                 return true;
             }
         }
@@ -96,34 +101,34 @@ public sealed unsafe class OutcomeTable
 
     public void Store(ulong key, bool win, int move, long work)
     {
-        // Work 0 would make data 0 for a loss without a move, which reads as an empty slot.
-        ulong data = (win ? 1UL : 0UL) | ((ulong)(move & 0xFF) << 1) | ((ulong)Math.Clamp(work, 1, (1L << 47) - 1) << 16);
-        ulong* b = _words + (long)(key & _mask) * 4;
-        ulong data0 = b[1];
-        bool sameAs0 = (b[0] ^ data0) == key;
-        if (sameAs0 || (data >> 16) >= (data0 >> 16))
+        int level = Math.Min(63, BitOperations.Log2((ulong)Math.Max(work, 1)));
+        ulong check = key & CheckBits;
+        ulong entry = check | Used | ((ulong)level << 9) | ((ulong)(move & 0xFF) << 1) | (win ? 1UL : 0UL);
+        ulong* b = _words + (long)(key & _mask) * Ways;
+        int victim = 0, least = int.MaxValue;
+        for (int slot = 0; slot < Ways; slot++)
         {
-            // Push the old deep entry down to the always-replace slot unless it is this position.
-            if (!sameAs0 && data0 != 0)
+            ulong e = b[slot];
+            if (e == 0 || (e & CheckBits) == check)
             {
-                b[2] = b[0];
-                b[3] = data0;
+                victim = slot;
+                break;
             }
-            b[0] = key ^ data;
-            b[1] = data;
+            int cost = (int)((e >> 9) & 63);
+            if (cost < least)
+            {
+                least = cost;
+                victim = slot;
+            }
         }
-        else
-        {
-            b[2] = key ^ data;
-            b[3] = data;
-        }
+        Volatile.Write(ref b[victim], entry);
     }
 
     /// <summary>Entries in use (a scan; for reports only).</summary>
     public long Count()
     {
         long n = 0;
-        for (long i = 1; i < _length; i += 2) if (_words[i] != 0) n++;
+        for (long i = 0; i < _length; i++) if (_words[i] != 0) n++;
         return n;
     }
 

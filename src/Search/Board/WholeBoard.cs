@@ -146,7 +146,7 @@ public sealed class WholeBoard
         }
     }
 
-    private const string TableMagic = "bramble-board-table/1";
+    private const string TableMagic = "bramble-board-table/2";
 
     /// <summary>Writes the board shape and the table, so that a later solve of the same board can resume from it.</summary>
     public void SaveTable(Stream stream)
@@ -164,6 +164,8 @@ public sealed class WholeBoard
     {
         using var r = new BinaryReader(stream, System.Text.Encoding.UTF8, leaveOpen: true);
         string magic = r.ReadString();
+        if (magic != TableMagic && magic.StartsWith("bramble-board-table/", StringComparison.Ordinal))
+            throw new InvalidDataException($"the board table was saved by an earlier version in another layout ('{magic}', this version reads '{TableMagic}'); delete the file and solve again");
         if (magic != TableMagic) throw new InvalidDataException($"not a saved board table (it starts with '{magic}')");
         int rows = r.ReadInt32(), columns = r.ReadInt32();
         var shape = new BoardShape(rows, columns);
