@@ -57,7 +57,7 @@ public sealed class PerfectPlayer : IPlayer
         var clock = Stopwatch.StartNew();
         long totalMs = SearchBudget.Milliseconds(budget);
         // Part of the time is kept back so that the fallback, when it is needed, still ends inside the budget.
-        long reserveMs = totalMs == long.MaxValue ? 0 : (long)Math.Min(Settings.FallbackMaxMs, totalMs * Settings.FallbackShare);
+        long reserveMs = totalMs == long.MaxValue || Settings.ProofOnly ? 0 : (long)Math.Min(Settings.FallbackMaxMs, totalMs * Settings.FallbackShare);
         var b = new SearchBudget(totalMs == long.MaxValue ? budget : TimeSpan.FromMilliseconds(totalMs - reserveMs), halt, Settings.NodeCap);
         _sums.Budget = b;
         _large.Budget = b;
@@ -77,12 +77,14 @@ public sealed class PerfectPlayer : IPlayer
         if (Settings.WholeBoard && Settings.NodeCap == long.MaxValue && position is DomineeringPosition board && WholeBoard.Fits(board.Board)
             && position.Components().Any(c => c.Size > Settings.ExactSize))
         {
-            // Half the time for the exact search, the rest for the depth-limited one if that fails.
-            long exactMs = totalMs == long.MaxValue ? long.MaxValue : totalMs / 2;
+            // Half the time for the exact search, the rest for the depth-limited one if that fails
+            // (all of it when only a proof is wanted).
+            long exactMs = totalMs == long.MaxValue ? long.MaxValue : Settings.ProofOnly ? totalMs : totalMs / 2;
             var answer = _board.Solve(board, side, () => b.Spent || clock.ElapsedMilliseconds >= exactMs);
             if (answer.Win is { } win)
                 return new Decision(answer.Move, answer.Nodes, b.ElapsedMs, Exact: true, Winning: win,
                     Line: answer.Line.Select(position.FormatMove).ToList());
+            if (Settings.ProofOnly) return Unproved(position, side, answer.Nodes, clock);
             // Out of budget: the depth-limited search on the same counts, in the time kept back.
             long deadline = totalMs == long.MaxValue ? long.MaxValue : totalMs;
             var play = _board.Play(board, side, () => halt.IsCancellationRequested || clock.ElapsedMilliseconds >= deadline);
@@ -105,6 +107,7 @@ public sealed class PerfectPlayer : IPlayer
         }
         catch (BudgetExceededException)
         {
+            if (Settings.ProofOnly) return Unproved(position, side, b.Nodes, clock);
             long leftMs = totalMs == long.MaxValue ? long.MaxValue : Math.Max(0, totalMs - clock.ElapsedMilliseconds);
             return Fallback(position, side, b, leftMs, halt, clock);
         }
@@ -237,6 +240,13 @@ public sealed class PerfectPlayer : IPlayer
         move ??= MostMobile(position, side);
         return new Decision(move, spent.Nodes + b.Nodes, clock.ElapsedMilliseconds, Exact: false,
             Line: [position.FormatMove(move.Value)], Estimated: estimated);
+    }
+
+    /// <summary>Out of budget when only a proof was wanted: no fallback search, just a legal move (the most mobile).</summary>
+    private static Decision Unproved(IPosition position, Side side, long nodes, Stopwatch clock)
+    {
+        var move = MostMobile(position, side);
+        return new Decision(move, nodes, clock.ElapsedMilliseconds, Exact: false, Line: [position.FormatMove(move)]);
     }
 
     /// <summary>The move after which the mover has the most moves left over the opponent: the last resort, costing one play per move.</summary>

@@ -35,6 +35,12 @@ public sealed record PerfectSettings
     public long FallbackMaxMs { get; init; } = 2_000;
 
     /// <summary>
+    /// Spend the whole budget on the exact answer and look for no fallback move past it: for
+    /// solving, where a move that is not proved is not reported anyway (<c>bramble solve</c>).
+    /// </summary>
+    public bool ProofOnly { get; init; }
+
+    /// <summary>
     /// A position whose ruleset offers a static estimate (<see cref="Bramble.Rules.IEstimable"/>, e.g.
     /// Amazons) and which has a component over this size is played by <see cref="HeuristicSearch"/>
     /// over the whole board instead: no exact value or proof search can finish there.

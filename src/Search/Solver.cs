@@ -24,14 +24,30 @@ public static class Solver
         SolveAnswer? left = null, right = null;
         foreach (var first in firsts)
         {
-            var d = player.Choose(position, first, budget, halt);
-            Side? winner = d.Exact && d.Winning is { } w ? (w ? first : first.Other()) : null;
-            string? move = winner == first && d.Move is { } m ? position.FormatMove(m) : null;
-            var answer = new SolveAnswer(first, winner, move, d.Nodes, d.ElapsedMs, d.Exact && winner is not null, d.Exact ? d.Line : null);
+            var answer = Ask(position, first, player, budget, halt);
             if (first == Side.Left) left = answer; else right = answer;
         }
+        // A side that ran out of budget before the other was solved is asked once more, briefly:
+        // the other side's search may have settled it on the way (on a square Domineering board
+        // the two are one search, transposed, sharing the player's table).
+        if (left is { Winner: null } && right is { Exact: true } && !halt.IsCancellationRequested)
+            left = Again(left, Ask(position, Side.Left, player, Shorter(budget), halt));
         return Report(left, right, player.Name);
     }
+
+    private static TimeSpan Shorter(TimeSpan budget) => budget == Timeout.InfiniteTimeSpan || budget > TimeSpan.FromSeconds(2) ? TimeSpan.FromSeconds(2) : budget;
+
+    private static SolveAnswer Ask(IPosition position, Side first, IPlayer player, TimeSpan budget, CancellationToken halt)
+    {
+        var d = player.Choose(position, first, budget, halt);
+        Side? winner = d.Exact && d.Winning is { } w ? (w ? first : first.Other()) : null;
+        string? move = winner == first && d.Move is { } m ? position.FormatMove(m) : null;
+        return new SolveAnswer(first, winner, move, d.Nodes, d.ElapsedMs, d.Exact && winner is not null, d.Exact ? d.Line : null);
+    }
+
+    /// <summary>The second try's answer, with the work of both tries.</summary>
+    private static SolveAnswer Again(SolveAnswer first, SolveAnswer second) =>
+        second with { Nodes = first.Nodes + second.Nodes, ElapsedMs = first.ElapsedMs + second.ElapsedMs };
 
     /// <summary>The report of one or two answers: the outcome class when both are known, the nodes and time of both.</summary>
     public static SolveReport Report(SolveAnswer? left, SolveAnswer? right, string strategy)

@@ -62,11 +62,11 @@ public class WholeBoardTests
 
     [Fact]
     public void SafeMoveBoundsAloneAgreeWithPlainSearch() =>
-        AgreesWithPlainSearch(new BoardSearchOptions { Symmetry = false, CountOrdering = false, KillersAndHistory = false }, 1902, 800);
+        AgreesWithPlainSearch(new BoardSearchOptions { Symmetry = false, CountOrdering = false, History = false }, 1902, 800);
 
     [Fact]
     public void SymmetricTableEntriesAloneAgreeWithPlainSearch() =>
-        AgreesWithPlainSearch(new BoardSearchOptions { SafeMoveBounds = false, CountOrdering = false, KillersAndHistory = false }, 1903, 800);
+        AgreesWithPlainSearch(new BoardSearchOptions { SafeMoveBounds = false, CountOrdering = false, History = false }, 1903, 800);
 
     [Fact]
     public void OrderingAloneAgreesWithPlainSearch() =>
@@ -124,7 +124,7 @@ public class WholeBoardTests
     public void RegionLeavesWithoutTheOtherShortcutsAgreeWithPlainSearch() =>
         AgreesWithPlainSearch(new BoardSearchOptions
         {
-            RegionLeaves = true, SafeMoveBounds = false, Symmetry = false, CountOrdering = false, KillersAndHistory = false,
+            RegionLeaves = true, SafeMoveBounds = false, Symmetry = false, CountOrdering = false, History = false,
         }, 1914, 1000);
 
     [Fact]

@@ -69,7 +69,7 @@ public static class SolveVerb
         var context = new ValueContext();
         DbOption.Load(db, context);
         if (strategy == "alphabeta") return Solver.Solve(pos, firsts, new AlphaBetaPlayer(log2TableSize: 22), budget);
-        var settings = new PerfectSettings { BoardOptions = new Bramble.Search.Board.BoardSearchOptions { Threads = extras.Threads } };
+        var settings = new PerfectSettings { ProofOnly = true, BoardOptions = new Bramble.Search.Board.BoardSearchOptions { Threads = extras.Threads } };
         var player = new PerfectPlayer(settings, context);
         if (extras.Table is { Exists: true } file)
         {

@@ -260,7 +260,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     private bool Wins(int s, int ply, bool boundsTried, bool expectWin)
     {
         Nodes++;
-        if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
+        if ((Nodes & 4095) == 1 && _spent()) _stop.Set();
         if (_stop.IsSet) return false;
         T me = _board[s];
         int w = _shape.Width[s];
@@ -386,7 +386,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     public int Score(int s, int depth, int alpha, int beta, int ply = 0)
     {
         Nodes++;
-        if ((Nodes & 4095) == 0 && _spent()) _stop.Set();
+        if ((Nodes & 4095) == 1 && _spent()) _stop.Set();
         if (_stop.IsSet) return 0;
         T me = _board[s];
         int w = _shape.Width[s];
@@ -421,7 +421,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
 
     private void Reward(int s, int ply, int move, long work)
     {
-        if (!_options.KillersAndHistory) return;
+        if (!_options.Killers && !_options.History) return;
         int slot = Math.Min(ply, MaxPly - 1) * 2;
         if (_killers[slot] != move)
         {
@@ -550,14 +550,14 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
 
     private static int Unpack(long packed) => 255 - (int)(packed & 255);
 
-    /// <summary>The sort key of a move: its gain, safe moves last, then history; killers first.</summary>
+    /// <summary>The sort key of a move: its gain, safe moves last, then history; killers first when they are on.</summary>
     private int Key(int gain, bool safe, int i, int k1, int k2, int[] hist)
     {
         int score = 0;
         if (_options.CountOrdering) score = safe ? 0 : (Math.Clamp(gain, -250, 250) + 256) << 21;
-        if (_options.KillersAndHistory)
+        if (_options.History) score += hist[i];
+        if (_options.Killers)
         {
-            score += hist[i];
             if (i == k1) score = int.MaxValue;
             else if (i == k2) score = int.MaxValue - 1;
         }

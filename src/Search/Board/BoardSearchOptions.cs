@@ -57,8 +57,15 @@ public sealed record BoardSearchOptions
     /// </summary>
     public bool ChildBounds { get; init; } = true;
 
-    /// <summary>Two killer moves per ply and a history count per move (common practice).</summary>
-    public bool KillersAndHistory { get; init; } = true;
+    /// <summary>
+    /// Two killer moves per ply, tried before every other move (common practice in chess programs).
+    /// Off by default: here they override the evaluation order when choosing which winning move
+    /// to prove, and 8×8 with Left first took 161 M nodes with them against 53 M without (bench/README.md).
+    /// </summary>
+    public bool Killers { get; init; }
+
+    /// <summary>A count per move of the cutoffs it made, breaking ties between moves of equal gain (common practice).</summary>
+    public bool History { get; init; } = true;
 
     /// <summary>
     /// Never search a safe move while the side to move has another move. Off by default: plain
