@@ -21,18 +21,18 @@ public static class Solver
     /// <param name="budget">The budget of each first player's search.</param>
     public static SolveReport Solve(IPosition position, IReadOnlyCollection<Side> firsts, IPlayer player, TimeSpan budget, CancellationToken halt = default)
     {
-        SolveAnswer? left = null, right = null;
-        foreach (var first in firsts)
+        var answers = new Dictionary<Side, SolveAnswer>();
+        foreach (var first in firsts) answers[first] = Ask(position, first, player, budget, halt);
+        // The side asked first, when it ran out of budget and the other was then solved, is asked
+        // once more, briefly: the other side's search may have settled it on the way (on a square
+        // Domineering board the two are one search, transposed, sharing the player's table).
+        if (firsts.Count == 2 && !halt.IsCancellationRequested)
         {
-            var answer = Ask(position, first, player, budget, halt);
-            if (first == Side.Left) left = answer; else right = answer;
+            Side early = firsts.First(), late = early.Other();
+            if (answers[early] is { Winner: null } unknown && answers.TryGetValue(late, out var other) && other.Exact)
+                answers[early] = Again(unknown, Ask(position, early, player, Shorter(budget), halt));
         }
-        // A side that ran out of budget before the other was solved is asked once more, briefly:
-        // the other side's search may have settled it on the way (on a square Domineering board
-        // the two are one search, transposed, sharing the player's table).
-        if (left is { Winner: null } && right is { Exact: true } && !halt.IsCancellationRequested)
-            left = Again(left, Ask(position, Side.Left, player, Shorter(budget), halt));
-        return Report(left, right, player.Name);
+        return Report(answers.GetValueOrDefault(Side.Left), answers.GetValueOrDefault(Side.Right), player.Name);
     }
 
     private static TimeSpan Shorter(TimeSpan budget) => budget == Timeout.InfiniteTimeSpan || budget > TimeSpan.FromSeconds(2) ? TimeSpan.FromSeconds(2) : budget;

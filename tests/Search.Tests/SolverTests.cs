@@ -31,18 +31,36 @@ public class SolverTests
     {
         var position = Domineering.Parse("4x4");
         var a1 = position.Moves(Side.Left)[0];
+        // Scripted figures: the report must add up both tries' nodes and milliseconds (no clock is read).
+        Decision[] leftTries = [new Decision(a1, 1_000, 60_000, Exact: false), new Decision(a1, 5, 1, Exact: true, Winning: true)];
         var player = new Scripted(new()
         {
-            [Side.Left] = new([new Decision(a1, 1_000, 60_000, Exact: false), new Decision(a1, 5, 1, Exact: true, Winning: true)]),
+            [Side.Left] = new(leftTries),
             [Side.Right] = new([new Decision(position.Moves(Side.Right)[0], 200, 9_000, Exact: true, Winning: true)]),
         });
         var report = Solver.Solve(position, [Side.Left, Side.Right], player, TimeSpan.FromMinutes(1));
         Assert.Equal([Side.Left, Side.Right, Side.Left], player.Calls.Select(c => c.Side));
         Assert.True(player.Calls[2].Budget <= TimeSpan.FromSeconds(2), "the second try should be brief");
         Assert.Equal(Side.Left, report.LeftFirst!.Winner);
-        Assert.Equal(1_005, report.LeftFirst.Nodes);
-        Assert.Equal(60_001, report.LeftFirst.ElapsedMs);
+        Assert.Equal(leftTries.Sum(d => d.Nodes), report.LeftFirst.Nodes);
+        Assert.Equal(leftTries.Sum(d => d.ElapsedMs), report.LeftFirst.ElapsedMs);
         Assert.True(report.Exact);
+        Assert.Equal(Outcome.N, report.Outcome);
+    }
+
+    [Fact]
+    public void WhicheverSideWasAskedFirstIsTheOneAskedAgain()
+    {
+        var position = Domineering.Parse("4x4");
+        var b1 = position.Moves(Side.Right)[0];
+        var player = new Scripted(new()
+        {
+            [Side.Right] = new([new Decision(b1, 10, 5, Exact: false), new Decision(b1, 3, 1, Exact: true, Winning: true)]),
+            [Side.Left] = new([new Decision(position.Moves(Side.Left)[0], 20, 5, Exact: true, Winning: true)]),
+        });
+        var report = Solver.Solve(position, [Side.Right, Side.Left], player, TimeSpan.FromMinutes(1));
+        Assert.Equal([Side.Right, Side.Left, Side.Right], player.Calls.Select(c => c.Side));
+        Assert.Equal(Side.Right, report.RightFirst!.Winner);
         Assert.Equal(Outcome.N, report.Outcome);
     }
 

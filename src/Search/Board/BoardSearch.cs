@@ -421,13 +421,13 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
 
     private void Reward(int s, int ply, int move, long work)
     {
-        if (!_options.Killers && !_options.History) return;
         int slot = Math.Min(ply, MaxPly - 1) * 2;
-        if (_killers[slot] != move)
+        if (_options.Killers && _killers[slot] != move)
         {
             _killers[slot + 1] = _killers[slot];
             _killers[slot] = move;
         }
+        if (!_options.History) return;
         var h = _history[s];
         h[move] += 1 + BitOperations.Log2((ulong)Math.Max(1, work));
         if (h[move] > 1 << 20)

@@ -145,8 +145,8 @@ public sealed unsafe class OutcomeTable
     public static OutcomeTable Read(BinaryReader r)
     {
         int n = r.ReadInt32();
-        int log2 = BitOperations.Log2((uint)Math.Max(n, 1) / 4);
-        if (n < 64 || log2 > 28 || n != 4 << log2) throw new InvalidDataException($"the saved table's size ({n} words) is not a power-of-two number of buckets");
+        int log2 = BitOperations.Log2((uint)Math.Max(n, 1) / Ways);
+        if (n < 64 || log2 > 28 || n != Ways << log2) throw new InvalidDataException($"the saved table's size ({n} words) is not a power-of-two number of buckets");
         var table = new OutcomeTable(log2);
         for (int i = 0; i < n; i++) table._words[i] = r.ReadUInt64();
         return table;

@@ -164,9 +164,10 @@ public sealed class WholeBoard
     {
         using var r = new BinaryReader(stream, System.Text.Encoding.UTF8, leaveOpen: true);
         string magic = r.ReadString();
-        if (magic != TableMagic && magic.StartsWith("bramble-board-table/", StringComparison.Ordinal))
-            throw new InvalidDataException($"the board table was saved by an earlier version in another layout ('{magic}', this version reads '{TableMagic}'); delete the file and solve again");
-        if (magic != TableMagic) throw new InvalidDataException($"not a saved board table (it starts with '{magic}')");
+        if (magic != TableMagic)
+            throw new InvalidDataException(magic.StartsWith("bramble-board-table/", StringComparison.Ordinal)
+                ? $"the board table was saved by an earlier version in another layout ('{magic}', this version reads '{TableMagic}'); delete the file and solve again"
+                : $"not a saved board table (it starts with '{magic}')");
         int rows = r.ReadInt32(), columns = r.ReadInt32();
         var shape = new BoardShape(rows, columns);
         // The table comes back at the size it was saved with, whatever this solver would pick.
