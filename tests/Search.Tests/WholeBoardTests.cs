@@ -128,6 +128,49 @@ public class WholeBoardTests
         }, 1914, 1000);
 
     [Fact]
+    public void BlocksOnlyWhereRunsAreExactlyTwoAgreeWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { RunEndBlocks = false }, 1915, 600);
+
+    /// <summary>
+    /// The bounds on their own, at the root, on boards of up to 6×7 with a third to a half of the
+    /// cells filled: whatever they decide, plain search decides the same. Run-end blocks must have
+    /// changed the verdict on some of these boards, or the test would not exercise them.
+    /// </summary>
+    [Fact]
+    public void TheBoundsDecideOnlyWhatPlainSearchDecides()
+    {
+        var brute = new BruteForce();
+        var rnd = new Random(1916);
+        int decided = 0, byRunEnds = 0;
+        for (int n = 0; n < 20000; n++)
+        {
+            int rows = rnd.Next(2, 7), columns = rnd.Next(2, 8);
+            double fill = 0.3 + 0.2 * rnd.NextDouble();
+            var empty = new bool[rows * columns];
+            for (int p = 0; p < empty.Length; p++) empty[p] = rnd.NextDouble() >= fill;
+            if (empty.Count(e => e) > 26) continue;
+            var position = (DomineeringPosition)Rules.Parse(string.Join("/", Enumerable.Range(0, rows).Select(r =>
+                new string(Enumerable.Range(0, columns).Select(c => empty[r * columns + c] ? '.' : '#').ToArray()))));
+            var shape = new BoardShape(rows, columns);
+            var withEnds = new BoardSearch<ulong>(shape, new OutcomeTable(4), new StopSignal(), new BoardSearchOptions());
+            var without = new BoardSearch<ulong>(shape, new OutcomeTable(4), new StopSignal(), new BoardSearchOptions { RunEndBlocks = false });
+            withEnds.SetPosition(empty);
+            without.SetPosition(empty);
+            foreach (var side in new[] { Side.Left, Side.Right })
+            {
+                int s = side == Side.Left ? 0 : 1;
+                int verdict = withEnds.BoundVerdict(s);
+                if (verdict == 0) continue;
+                decided++;
+                if (without.BoundVerdict(s) != verdict) byRunEnds++;
+                Assert.True(brute.Wins(position, side) == verdict > 0, $"{side.Word()} first on {position.Text}: the bounds say {(verdict > 0 ? "win" : "loss")}");
+            }
+        }
+        Assert.True(decided > 10000, $"only {decided} positions decided by the bounds");
+        Assert.True(byRunEnds > 2000, $"run-end blocks changed only {byRunEnds} verdicts");
+    }
+
+    [Fact]
     public void TheBlockAndSpareRaceHasItsClosedForms()
     {
         var sure = SureMoves.Shared;

@@ -161,6 +161,8 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         T b = _board[s];
         Span<uint> rows = stackalloc uint[h];
         Span<uint> used = stackalloc uint[h];
+        Span<uint> near = stackalloc uint[h];
+        near.Clear();
         for (int r = 0; r < h; r++) rows[r] = uint.CreateTruncating(b >> (r * w)) & rm;
         int possible = 0, safe = 0, blocks = 0, spare = 0;
         uint usedP = 0, usedS = 0, usedB = 0, usedX = 0;
@@ -182,7 +184,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             used[r - 1] |= u;
             used[r] = u;
             prevSafe = curSafe;
-            if (_options.ProtectiveBlocks)
+            if (_options.ProtectiveBlocks && !_options.RunEndBlocks)
             {
                 // Runs of exactly two across in both rows, at the same columns: a protective block
                 // (its cells are never protected, so never part of a safe move).
@@ -196,12 +198,14 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 prevRun2 = curRun2;
             }
         }
+        if (_options.ProtectiveBlocks && _options.RunEndBlocks)
+            blocks = EndBlocks(rows, used, near, h, rm);
         Span<uint> spareCells = stackalloc uint[h];
         Span<uint> spareTops = stackalloc uint[h];
         spareCells[0] = 0;
         for (int r = 1; r < h; r++)
         {
-            uint x = rows[r - 1] & ~used[r - 1] & ~usedX & rows[r] & ~used[r];
+            uint x = rows[r - 1] & ~used[r - 1] & ~near[r - 1] & ~usedX & rows[r] & ~used[r] & ~near[r];
             spare += BitOperations.PopCount(x);
             usedX = x;
             spareCells[r - 1] |= x;
@@ -224,6 +228,51 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         return (possible, safe, blocks, lone, spare - lone);
     }
 
+    /// <summary>
+    /// Protective blocks at the ends of runs (Uiterwijk's safe-making moves, ICGA J. 37, 2014): two
+    /// rows whose runs across end at the same two columns, on the same side. A move down the inner
+    /// column leaves the outer one protected (its far neighbour is filled or off the board), so it is
+    /// worth this move and a safe one; it also takes one move off each row's runs for the opponent,
+    /// whatever their length, as a run of exactly two does. Chosen greedily from the top and the
+    /// left, disjoint from the safe moves and from each other, and with no cell of one beside a cell
+    /// of another: so one opponent move spoils at most one of them. The cells beside them across
+    /// are returned in <paramref name="near"/>: the spares keep clear of them for the same reason.
+    /// </summary>
+    private static int EndBlocks(ReadOnlySpan<uint> rows, Span<uint> used, Span<uint> near, int h, uint rm)
+    {
+        int blocks = 0;
+        uint prevRight = RightEnds(rows[0]), prevLeft = LeftEnds(rows[0]);
+        for (int r = 1; r < h; r++)
+        {
+            uint curRight = RightEnds(rows[r]), curLeft = LeftEnds(rows[r]);
+            uint both = (prevRight & curRight) | (prevLeft & curLeft);
+            prevRight = curRight;
+            prevLeft = curLeft;
+            if (both == 0) continue;
+            uint taken = used[r - 1] | used[r] | near[r - 1] | near[r];
+            for (uint c = both; c != 0; c &= c - 1)
+            {
+                uint first = c & (0u - c);
+                uint cells = first | (first << 1);
+                if ((cells & taken) != 0) continue;
+                blocks++;
+                uint beside = ((cells << 1) | (cells >> 1)) & ~cells & rm;
+                used[r - 1] |= cells;
+                used[r] |= cells;
+                near[r - 1] |= beside;
+                near[r] |= beside;
+                taken |= cells | beside;
+            }
+        }
+        return blocks;
+    }
+
+    /// <summary>The first cells of the pairs of empty cells across a row that end a run on the right (the cell beyond is filled or off the board).</summary>
+    private static uint RightEnds(uint x) => x & (x >> 1) & ~(x >> 2);
+
+    /// <summary>The first cells of the pairs of empty cells across a row that start a run (the cell before is filled or off the board).</summary>
+    private static uint LeftEnds(uint x) => x & (x >> 1) & ~(x << 1);
+
     /// <summary>The first cells of the runs of exactly two empty cells across a row.</summary>
     private static uint Run2(uint x) => x & (x >> 1) & ~(x << 1) & ~(x >> 2);
 
@@ -235,6 +284,20 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         safe + _sure.Get(blocks, lone, spare, movesFirst);
 
     private readonly SureMoves _sure;
+
+    /// <summary>
+    /// The safe-move bounds for side s to move here: +1 when its sure moves outlast every move the
+    /// opponent can still make (it wins), −1 when the opponent answers each of its possible moves
+    /// with one of the opponent's sure moves (it loses), 0 when they decide nothing.
+    /// </summary>
+    public int BoundVerdict(int s)
+    {
+        var (possible, safe, blocks, lone, spare) = Counts(s);
+        var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
+        if (Guaranteed(safe, blocks, lone, spare, movesFirst: true) > oppPossible) return 1;
+        if (Guaranteed(oppSafe, oppBlocks, oppLone, oppSpare, movesFirst: false) >= possible) return -1;
+        return 0;
+    }
     private ulong Key(int s, out int mirror)
     {
         ulong best = _hash[s * 4];
@@ -267,12 +330,8 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         if ((me & (me >> w)) == T.Zero) return false;
         if (_options.SafeMoveBounds && !boundsTried)
         {
-            var (possible, safe, blocks, lone, spare) = Counts(s);
-            var (oppPossible, oppSafe, oppBlocks, oppLone, oppSpare) = Counts(1 - s);
-            // The mover's sure moves outlast every move the opponent can still make.
-            if (Guaranteed(safe, blocks, lone, spare, movesFirst: true) > oppPossible) return true;
-            // The opponent answers each of the mover's possible moves with one of its sure moves.
-            if (Guaranteed(oppSafe, oppBlocks, oppLone, oppSpare, movesFirst: false) >= possible) return false;
+            int verdict = BoundVerdict(s);
+            if (verdict != 0) return verdict > 0;
         }
         ulong key = Key(s, out int mirror);
         if (_table.TryGet(key, out bool known, out _)) return known;

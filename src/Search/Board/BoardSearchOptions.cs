@@ -21,6 +21,14 @@ public sealed record BoardSearchOptions
     public bool ProtectiveBlocks { get; init; } = true;
 
     /// <summary>
+    /// Count as protective blocks not only runs of exactly two across but any two rows whose runs
+    /// end at the same two columns on the same side (Uiterwijk's safe-making moves, ICGA J. 37,
+    /// 2014): a move down the inner column leaves the outer one safe, and takes one opponent move
+    /// off each row as a run of two does. No cell of such a block stands beside another counted area.
+    /// </summary>
+    public bool RunEndBlocks { get; init; } = true;
+
+    /// <summary>
     /// Count apart the spare moves that no opponent move can spoil together with another (Bullock
     /// 2002 calls them vulnerable areas of the first type): one in two of them is sure, not one in three.
     /// </summary>
