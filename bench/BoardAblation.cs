@@ -44,6 +44,7 @@ public static class BoardAblation
             ("no-history", all with { History = false }),
             ("killers-no-history", all with { Killers = true, History = false }),
             ("no-blocks", all with { ProtectiveBlocks = false }),
+            ("no-run-end-blocks", all with { RunEndBlocks = false }),
             ("no-block-margin", all with { BlockMargin = false }),
             ("no-lone-spares", all with { LoneSpares = false }),
             ("no-child-bounds", all with { ChildBounds = false }),
