@@ -158,9 +158,9 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     /// <summary>
     /// Move counts of side s: Possible, its most disjoint moves now (an upper bound on the moves it
     /// can still make); Safe, disjoint moves the opponent can never take away; Blocks, protective
-    /// 2×2 areas (two side-by-side pairs that form a run of exactly two across, in both rows: a move in
-    /// one column leaves the other column safe, and the only opponent moves touching it lie inside
-    /// it — Bullock 2002); Spare, further moves disjoint from all those and from each other (each
+    /// 2×2 areas (two side-by-side pairs that end a run across in both rows, on the same side, or with
+    /// <see cref="BoardSearchOptions.RunEndBlocks"/> off form a run of exactly two: a move in the
+    /// inner column leaves the outer column safe — Bullock 2002; Uiterwijk 2014); Spare, further moves disjoint from all those and from each other (each
     /// opponent move can spoil at most two of them); Lone, the spares that no opponent move can
     /// spoil together with another (counted apart from Spare).
     /// </summary>
