@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.Runtime.InteropServices;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using Bramble.Rules;
@@ -83,10 +84,16 @@ public static class SolveVerb
                 throw new InputException($"--table {file.Name}: {e.Message}");
             }
         }
-        // Ctrl-C stops the search cleanly, so that the table is still written for a later resume.
+        // Ctrl-C stops the search cleanly, so that the table is still written for a later resume;
+        // so does SIGTERM, which is how `timeout`, a scheduler or a service manager ends a long solve.
         using var halt = new CancellationTokenSource();
         ConsoleCancelEventHandler onCancel = (_, e) => { e.Cancel = true; halt.Cancel(); };
         Console.CancelKeyPress += onCancel;
+        using var term = PosixSignalRegistration.Create(PosixSignal.SIGTERM, context =>
+        {
+            context.Cancel = true;
+            halt.Cancel();
+        });
         using var timer = extras.Progress ? new Timer(_ => Report(player.WholeBoard.Current), null, 2000, 2000) : null;
         try
         {
