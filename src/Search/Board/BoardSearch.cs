@@ -36,10 +36,6 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     // Per side and top cell: the bits a move clears in its own view and in the other one.
     private readonly T[][] _clearOwn = new T[2][], _clearOther = new T[2][];
 
-    // Per side and top cell: the row of the other view that holds the move's two cells (high 16
-    // bits) and the column of the first of them there (low 16 bits).
-    private readonly int[][] _across = new int[2][];
-
     // Shared with the other threads of a solve that search the same tree: who is searching what.
     private readonly BusyMarks? _busy;
 
@@ -64,16 +60,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             (_notLastColumn[v], _notFirstColumn[v]) = ColumnMasks.Of<T>(shape, v);
             _clearOwn[v] = new T[shape.Cells];
             _clearOther[v] = new T[shape.Cells];
-            _across[v] = new int[shape.Cells];
-            int wo = shape.Width[1 - v];
             for (int i = 0; i + w < shape.Cells; i++)
             {
                 _clearOwn[v][i] = ~((T.One << i) | (T.One << (i + w)));
                 _clearOther[v][i] = ~((T.One << shape.ToOther[v][i]) | (T.One << shape.ToOther[v][i + w]));
-                // The other view is the transpose: a domino down a column of this view lies along one row there.
-                int a = Math.Min(shape.ToOther[v][i], shape.ToOther[v][i + w]), b = Math.Max(shape.ToOther[v][i], shape.ToOther[v][i + w]);
-                if (b != a + 1 || a / wo != b / wo) throw new InvalidOperationException("the other view is not the transpose");
-                _across[v][i] = (a / wo) << 16 | (a % wo);
             }
             _ = h;
         }
@@ -187,7 +177,6 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         uint rm = _rowMask[s];
         Span<uint> used = stackalloc uint[h];
         Span<uint> near = stackalloc uint[h];
-        near.Clear();
         int possible = 0, safe = 0, blocks = 0, spare = 0;
         uint usedP = 0, usedS = 0, usedB = 0, usedX = 0;
         uint prevSafe = rows[0] & ~(rows[0] >> 1) & ~(rows[0] << 1);
@@ -578,27 +567,26 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             // nearly always among them, and when none is, every child is counted anyway.
             if (judge) SelectFirst(order, n, 4);
             // The position each move leaves, by the same counts as the bounds, on the rows of both
-            // views: a move clears one cell in each of two rows of its own view and two cells of
-            // one row of the other view.
+            // views: a move at row r, column c clears column c in rows r and r + 1 of its own view,
+            // and columns r and r + 1 of row c in the other view (the transpose, BoardShape).
             Span<uint> ownRows = stackalloc uint[_shape.Height[s]];
             Span<uint> otherRows = stackalloc uint[_shape.Height[1 - s]];
             Rows(s, ownRows);
             Rows(1 - s, otherRows);
-            var across = _across[s];
             for (int k = 0; k < n; k++)
             {
                 int at = Unpack(order[k]), i = cells[at];
-                int r = i / w, ro = across[i] >> 16;
-                uint bit = 1u << (i - r * w);
-                uint top = ownRows[r], bottom = ownRows[r + 1], row = otherRows[ro];
+                int r = i / w, c = i - r * w;
+                uint bit = 1u << c;
+                uint top = ownRows[r], bottom = ownRows[r + 1], row = otherRows[c];
                 ownRows[r] = top & ~bit;
                 ownRows[r + 1] = bottom & ~bit;
-                otherRows[ro] = row & ~(3u << (across[i] & 0xFFFF));
+                otherRows[c] = row & ~(3u << r);
                 var (p1, s1, b1, v1, x1) = Counts(s, ownRows);
                 var (p2, s2, b2, v2, x2) = Counts(1 - s, otherRows);
                 ownRows[r] = top;
                 ownRows[r + 1] = bottom;
-                otherRows[ro] = row;
+                otherRows[c] = row;
                 int gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gains[at];
                 order[k] = Pack(Key(gain, safeMoves[at], i, k1, k2, hist), at);
                 if (!judge) continue;
