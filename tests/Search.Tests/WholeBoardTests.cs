@@ -83,6 +83,18 @@ public class WholeBoardTests
     public void ThreadsSharingTheTreeAgreeWithPlainSearch() =>
         AgreesWithPlainSearch(new BoardSearchOptions { Threads = 2, ShareTree = true }, 1913, 300);
 
+    [Theory]
+    [InlineData("..#./...#/#.../...#")]
+    public void ThreadsSharingTheTreeNameAWinningMoveWhereTheBoundsDecideTheRoot(string text)
+    {
+        // Found by the random cross-check of another search: the bounds decide the root at once,
+        // so the table holds no move for it and the first move in the order does not win.
+        var position = (DomineeringPosition)Rules.Parse(text);
+        var answer = new WholeBoard(new BoardSearchOptions { Threads = 2, ShareTree = true, TableLog2 = 12 }).Solve(position, Side.Right);
+        Assert.True(answer.Win);
+        Assert.False(new BruteForce().Wins(position.Play(Side.Right, answer.Move!.Value), Side.Left), $"{position.FormatMove(answer.Move.Value)} does not win");
+    }
+
     [Fact]
     public void ThreadsSharingTheTreeToAFewPliesAgreeWithPlainSearch() =>
         AgreesWithPlainSearch(new BoardSearchOptions { Threads = 3, ShareTree = true, ShareDepth = 3 }, 1914, 300);
@@ -126,6 +138,23 @@ public class WholeBoardTests
         {
             RegionLeaves = true, SafeMoveBounds = false, Symmetry = false, CountOrdering = false, History = false,
         }, 1914, 1000);
+
+    [Fact]
+    public void ProofNumberSearchAgreesWithPlainSearch() =>
+        // Depth-first proof-number search (Nagai 2002) on the same bounds, order and table.
+        AgreesWithPlainSearch(new BoardSearchOptions { ProofNumberSearch = true }, 1916, 1000);
+
+    [Fact]
+    public void ProofNumberSearchWithFlatEstimatesAgreesWithPlainSearch() =>
+        AgreesWithPlainSearch(new BoardSearchOptions { ProofNumberSearch = true, ProofEstimate = false }, 1917, 600);
+
+    [Fact]
+    public void ProofNumberSearchWithoutTheShortcutsAgreesWithPlainSearch() =>
+        // No bounds, no symmetric entries, no order: the numbers alone pick the moves.
+        AgreesWithPlainSearch(new BoardSearchOptions
+        {
+            ProofNumberSearch = true, SafeMoveBounds = false, Symmetry = false, CountOrdering = false, History = false,
+        }, 1918, 600);
 
     [Fact]
     public void BlocksOnlyWhereRunsAreExactlyTwoAgreeWithPlainSearch() =>
@@ -252,7 +281,7 @@ public class WholeBoardTests
     {
         var position = (DomineeringPosition)Rules.Parse($"{m}x{n}");
         var solver = new WholeBoard(new BoardSearchOptions { TableLog2 = 18 });
-        var left = solver.Solve(position, Side.Left);
+        var left = solver.Solve(position, Side.Right);
         var right = solver.Solve(position, Side.Right);
         var outcome = OutcomeExtensions.FromWinners(left.Win!.Value ? Side.Left : Side.Right, right.Win!.Value ? Side.Right : Side.Left);
         // Published class: see Rectangles and VerticalFirst for the source of each.
@@ -283,7 +312,7 @@ public class WholeBoardTests
     {
         var position = (DomineeringPosition)Rules.Parse("5x5");
         var first = new WholeBoard(new BoardSearchOptions { TableLog2 = 14 });
-        var fresh = first.Solve(position, Side.Left);
+        var fresh = first.Solve(position, Side.Right);
         using var file = new MemoryStream();
         first.SaveTable(file);
         file.Position = 0;
@@ -291,7 +320,7 @@ public class WholeBoardTests
         var second = new WholeBoard(new BoardSearchOptions { TableLog2 = 18 });
         second.LoadTable(file);
         Assert.Equal(1L << 14, second.Table!.Buckets);
-        var resumed = second.Solve(position, Side.Left);
+        var resumed = second.Solve(position, Side.Right);
         // 5×5 is a second-player win (as above); the resumed solve finds the root in the table.
         Assert.False(fresh.Win);
         Assert.Equal(fresh.Win, resumed.Win);

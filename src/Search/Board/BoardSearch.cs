@@ -16,7 +16,7 @@ namespace Bramble.Search.Board;
 /// </para>
 /// One instance per thread; instances of one solve share the shape, the table and the stop signal.
 /// </summary>
-public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
+public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
 {
     private const int MaxPly = 72;
 
@@ -516,7 +516,10 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
     /// alone is returned), 0 when they leave it open. Moves after which the opponent wins by them
     /// are left out of the list (−1 only with the skip-safe-moves experiment, which keeps them).
     /// </summary>
-    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts)
+    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts) => Generate(s, ply, moves, verdicts, []);
+
+    /// <summary>As above; when <paramref name="replies"/> has room, also the opponent's possible moves after each move.</summary>
+    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts, Span<int> replies)
     {
         bool judge = verdicts.Length >= moves.Length && _options.SafeMoveBounds && _options.ChildBounds;
         T b = _board[s];
@@ -531,6 +534,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         Span<int> gains = stackalloc int[moves.Length];
         Span<bool> safeMoves = stackalloc bool[moves.Length];
         Span<sbyte> judged = stackalloc sbyte[moves.Length];
+        Span<int> oppPossible = stackalloc int[moves.Length];
         Span<long> order = stackalloc long[moves.Length];
         int slot = Math.Min(ply, MaxPly - 1) * 2;
         int k1 = _killers[slot], k2 = _killers[slot + 1];
@@ -588,6 +592,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                 ownRows[r + 1] = bottom;
                 otherRows[c] = row;
                 int gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gains[at];
+                oppPossible[at] = p2;
                 order[k] = Pack(Key(gain, safeMoves[at], i, k1, k2, hist), at);
                 if (!judge) continue;
                 // The very tests the child would make first (Wins), settled here without visiting it.
@@ -621,6 +626,7 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
             int at = Unpack(order[k]);
             moves[k] = cells[at];
             if (judge) verdicts[k] = judged[at];
+            if (replies.Length >= n) replies[k] = oppPossible[at];
         }
         // The experiment of skipping safe moves: drop them (sorted last) unless nothing else is left.
         if (skipSafe && safeCount < n) n -= safeCount;

@@ -186,6 +186,8 @@ public sealed class WholeBoard
         var rootMoves = main.OrderedMoves(s);
         if (rootMoves.Length == 0) return new BoardAnswer(false, null, 1, clock.ElapsedMilliseconds, [], 0, 0);
 
+        if (Options.ProofNumberSearch)
+            return RunProofNumbers<T>(shape, table, empty, s, rootMoves, spent, clock, main);
         if (Options.Threads > 1 && Options.SplitBelowRoot)
             return RunSplit<T>(shape, table, empty, s, rootMoves, spent, clock);
         if (Options.Threads > 1 && Options.ShareTree)
@@ -286,10 +288,38 @@ public sealed class WholeBoard
         // The move the table holds for the root: the winning one, or the most stubborn defence.
         var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
         reader.SetPosition(empty);
-        int stored = reader.TableMove(s, out _);
-        int at = Math.Max(0, Array.IndexOf(rootMoves, stored));
+        int at = Array.IndexOf(rootMoves, reader.TableMove(s, out _));
+        // A root the bounds decided has no move in the table: the first move that leaves the opponent lost.
+        if (at < 0 && result) at = Array.FindIndex(rootMoves, m => Leaves(reader, s, m, lost: true));
+        at = Math.Max(0, at);
         if (!result) work[at] = 1;
         return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, result, result ? at : -1, work, nodes, rootMoves.Length);
+    }
+
+    /// <summary>One thread, proof-number search (<see cref="BoardSearchOptions.ProofNumberSearch"/>); the root move from the table.</summary>
+    private BoardAnswer RunProofNumbers<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent, Stopwatch clock, BoardSearch<T> main)
+        where T : unmanaged, IBinaryInteger<T>
+    {
+        _liveNodes = () => main.Nodes;
+        _liveClock = clock;
+        _liveMoves = rootMoves;
+        _liveSide = s;
+        _liveRootCell = () => main.RootMove;
+        var proofs = new ProofTable(BitOperations.Log2((ulong)table.Buckets));
+        bool? result = main.ProveWins(s, proofs);
+        _liveNodes = null;
+        _liveRootCell = null;
+        var work = new long[rootMoves.Length];
+        if (result is null)
+            return new BoardAnswer(null, null, main.Nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, 0);
+        var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
+        reader.SetPosition(empty);
+        int at = Array.IndexOf(rootMoves, reader.TableMove(s, out _));
+        // A root the bounds decided has no move in the table: the first move that leaves the opponent lost.
+        if (at < 0 && result == true) at = Array.FindIndex(rootMoves, m => Leaves(reader, s, m, lost: true));
+        at = Math.Max(0, at);
+        if (result == false) work[at] = 1;
+        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, result, result == true ? at : -1, work, main.Nodes + reader.Nodes, rootMoves.Length);
     }
 
     /// <summary>Runs the worker on that many threads at once and waits for them all.</summary>
