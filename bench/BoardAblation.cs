@@ -45,8 +45,6 @@ public static class BoardAblation
             ("killers-no-history", all with { Killers = true, History = false }),
             ("no-blocks", all with { ProtectiveBlocks = false }),
             ("no-run-end-blocks", all with { RunEndBlocks = false }),
-            ("proof-numbers", all with { ProofNumberSearch = true }),
-            ("proof-numbers-flat", all with { ProofNumberSearch = true, ProofEstimate = false }),
             ("no-block-margin", all with { BlockMargin = false }),
             ("no-lone-spares", all with { LoneSpares = false }),
             ("no-child-bounds", all with { ChildBounds = false }),

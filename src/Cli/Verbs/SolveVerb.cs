@@ -29,7 +29,7 @@ public static class SolveVerb
         var json = new Option<bool>("--json") { Description = "Print JSON (fields in docs/cli.md)" };
         var threads = new Option<int>("--threads") { Description = "Threads of the whole-board search of big Domineering boards", DefaultValueFactory = _ => Math.Min(2, Environment.ProcessorCount), HelpName = "N" };
         var table = new Option<FileInfo?>("--table") { Description = "Whole-board table file: read before the solve when it exists, written after it (so an interrupted solve resumes)", HelpName = "FILE" };
-        var progress = new Option<bool>("--progress") { Description = "Report nodes, nodes per second and the root move being searched on stderr every few seconds" };
+        var progress = new Option<bool>("--progress") { Description = "Report nodes, nodes per second, the root move being searched and the line below it on stderr every two seconds" };
         var search = new Option<bool>("--search") { Description = "Search even where a published theorem gives the winner (empty Domineering rectangles)" };
         var command = new Command("solve", "Who wins with each side moving first, and a winning first move") { ruleset, position, first, strategy, budget, json, threads, table, progress, search };
         command.Options.Add(DbOption.Option);
@@ -116,7 +116,10 @@ public static class SolveVerb
     {
         if (p is not { } x) return;
         double rate = x.ElapsedMs > 0 ? x.Nodes * 1000.0 / x.ElapsedMs : 0;
-        Console.Error.WriteLine($"solve: {x.Nodes:N0} nodes, {rate:N0} nodes/s, {x.ElapsedMs / 1000.0:F0} s, root move {Bramble.Rules.Domineering.CellName.Format(x.RootMove.A)} ({x.RootMoveIndex + 1} of {x.RootMoves})");
+        string below = x.Below is { Count: > 0 } line
+            ? "; below it " + string.Join(", ", line.Select(m => $"{Bramble.Rules.Domineering.CellName.Format(m.Move.A)} ({m.Place} of {m.Open})"))
+            : "";
+        Console.Error.WriteLine($"solve: {x.Nodes:N0} nodes, {rate:N0} nodes/s, {x.ElapsedMs / 1000.0:F0} s, root move {Bramble.Rules.Domineering.CellName.Format(x.RootMove.A)} ({x.RootMoveIndex + 1} of {x.RootMoves}){below}");
     }
 
     public static string ToText(SolveReport r)

@@ -16,7 +16,7 @@ namespace Bramble.Search.Board;
 /// </para>
 /// One instance per thread; instances of one solve share the shape, the table and the stop signal.
 /// </summary>
-public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
+public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
 {
     private const int MaxPly = 72;
 
@@ -73,6 +73,25 @@ public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T
     public int RootMove => Volatile.Read(ref _rootMove);
 
     private int _rootMove = -1;
+
+    // The moves being searched at the first plies, their places among the moves open there and how
+    // many are open: read by progress reports from another thread (a torn read only mixes two lines).
+    private const int ShownPlies = 4;
+    private readonly int[] _lineMove = new int[ShownPlies], _linePlace = new int[ShownPlies], _lineOpen = new int[ShownPlies];
+    private int _lineDepth;
+
+    /// <summary>
+    /// The moves this instance is searching at its first plies (top cells, the side alternating from
+    /// the side it was asked about), each with its place (from 1) among the moves left open there
+    /// and how many those are; for progress reports.
+    /// </summary>
+    public (int Cell, int Place, int Open)[] SearchLine()
+    {
+        int d = Volatile.Read(ref _lineDepth);
+        var line = new (int, int, int)[d];
+        for (int p = 0; p < d; p++) line[p] = (_lineMove[p], _linePlace[p], _lineOpen[p]);
+        return line;
+    }
 
     /// <summary>Nodes visited by this instance.</summary>
     public long Nodes { get; private set; }
@@ -407,6 +426,11 @@ public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T
                 }
                 long before = Nodes;
                 if (ply == 0) Volatile.Write(ref _rootMove, i);
+                if (ply < ShownPlies)
+                {
+                    (_lineMove[ply], _linePlace[ply], _lineOpen[ply]) = (i, tried + 1, n);
+                    Volatile.Write(ref _lineDepth, ply + 1);
+                }
                 Play(s, i);
                 bool replyWins = Wins(1 - s, ply + 1, judged, expectWin: !expectWin || tried > 0);
                 Undo(s, i, me, other);
@@ -516,10 +540,7 @@ public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T
     /// alone is returned), 0 when they leave it open. Moves after which the opponent wins by them
     /// are left out of the list (−1 only with the skip-safe-moves experiment, which keeps them).
     /// </summary>
-    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts) => Generate(s, ply, moves, verdicts, []);
-
-    /// <summary>As above; when <paramref name="replies"/> has room, also the opponent's possible moves after each move.</summary>
-    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts, Span<int> replies)
+    private int Generate(int s, int ply, Span<int> moves, Span<sbyte> verdicts)
     {
         bool judge = verdicts.Length >= moves.Length && _options.SafeMoveBounds && _options.ChildBounds;
         T b = _board[s];
@@ -534,7 +555,6 @@ public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T
         Span<int> gains = stackalloc int[moves.Length];
         Span<bool> safeMoves = stackalloc bool[moves.Length];
         Span<sbyte> judged = stackalloc sbyte[moves.Length];
-        Span<int> oppPossible = stackalloc int[moves.Length];
         Span<long> order = stackalloc long[moves.Length];
         int slot = Math.Min(ply, MaxPly - 1) * 2;
         int k1 = _killers[slot], k2 = _killers[slot + 1];
@@ -592,7 +612,6 @@ public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T
                 ownRows[r + 1] = bottom;
                 otherRows[c] = row;
                 int gain = 4 * (s1 - s2) + 2 * (p1 - p2) + gains[at];
-                oppPossible[at] = p2;
                 order[k] = Pack(Key(gain, safeMoves[at], i, k1, k2, hist), at);
                 if (!judge) continue;
                 // The very tests the child would make first (Wins), settled here without visiting it.
@@ -626,7 +645,6 @@ public sealed partial class BoardSearch<T> where T : unmanaged, IBinaryInteger<T
             int at = Unpack(order[k]);
             moves[k] = cells[at];
             if (judge) verdicts[k] = judged[at];
-            if (replies.Length >= n) replies[k] = oppPossible[at];
         }
         // The experiment of skipping safe moves: drop them (sorted last) unless nothing else is left.
         if (skipSafe && safeCount < n) n -= safeCount;

@@ -116,16 +116,6 @@ public sealed record BoardSearchOptions
     /// <summary>Plies from the root within which threads sharing the tree mark and put off moves.</summary>
     public int ShareDepth { get; init; } = 24;
 
-    /// <summary>
-    /// Search by proof and disproof numbers (depth-first proof-number search) instead of alpha-beta,
-    /// on one thread: it works on whichever move looks cheapest to settle, so a first move whose
-    /// proof is far bigger than another's does not hold the search. Off by default (bench/README.md).
-    /// </summary>
-    public bool ProofNumberSearch { get; init; }
-
-    /// <summary>With <see cref="ProofNumberSearch"/>, a new position's disproof number starts at the opponent's possible moves rather than 1 (the opponent must be refuted in each).</summary>
-    public bool ProofEstimate { get; init; } = true;
-
     /// <summary>Threads searching the root moves (sharing the table).</summary>
     public int Threads { get; init; } = 1;
 }

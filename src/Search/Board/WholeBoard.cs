@@ -13,7 +13,8 @@ namespace Bramble.Search.Board;
 public sealed record BoardAnswer(bool? Win, Move? Move, long Nodes, long ElapsedMs, IReadOnlyList<Move> Line, int RootMoves, int RootMovesSearched);
 
 /// <summary>Progress of a running solve, for a report on stderr.</summary>
-public readonly record struct BoardProgress(long Nodes, long ElapsedMs, int RootMoveIndex, int RootMoves, Move RootMove);
+/// <param name="Below">The moves being searched below the root move, a ply each (the opponent's reply first), with each one's place (from 1) among the moves left open there and how many those are; empty when not known.</param>
+public readonly record struct BoardProgress(long Nodes, long ElapsedMs, int RootMoveIndex, int RootMoves, Move RootMove, IReadOnlyList<(Move Move, int Place, int Open)> Below);
 
 /// <summary>
 /// Solves whole Domineering boards of up to 128 cells with <see cref="BoardSearch{T}"/>: picks the
@@ -37,6 +38,9 @@ public sealed class WholeBoard
     private int[]? _liveMoves;
     private int _liveSide;
     private Func<int>? _liveRootCell;
+    // The line below the root move: a searcher's first plies, and whether its ply 0 is the root itself.
+    private Func<(int Cell, int Place, int Open)[]>? _liveLine;
+    private bool _liveLineFromRoot;
 
     /// <summary>The table of the last shape solved (for saving and resuming).</summary>
     public OutcomeTable? Table => _table;
@@ -142,7 +146,19 @@ public sealed class WholeBoard
             if (nodes is null || clock is null || moves is null || shape is null) return null;
             int k = _liveRootCell is { } cell ? Array.IndexOf(moves, cell()) : Volatile.Read(ref _liveRoot);
             k = Math.Clamp(k, 0, moves.Length - 1);
-            return new BoardProgress(nodes(), clock.ElapsedMilliseconds, k, moves.Length, ToMove(shape, _liveSide, moves[k]));
+            var below = new List<(Move, int, int)>();
+            if (_liveLine is { } line)
+            {
+                bool fromRoot = _liveLineFromRoot;
+                var plies = line();
+                for (int p = fromRoot ? 1 : 0; p < plies.Length && below.Count < 3; p++)
+                {
+                    // Below the root the sides alternate, the opponent's reply first.
+                    int side = (below.Count % 2 == 0) ? 1 - _liveSide : _liveSide;
+                    below.Add((ToMove(shape, side, plies[p].Cell), plies[p].Place, plies[p].Open));
+                }
+            }
+            return new BoardProgress(nodes(), clock.ElapsedMilliseconds, k, moves.Length, ToMove(shape, _liveSide, moves[k]), below);
         }
     }
 
@@ -186,8 +202,6 @@ public sealed class WholeBoard
         var rootMoves = main.OrderedMoves(s);
         if (rootMoves.Length == 0) return new BoardAnswer(false, null, 1, clock.ElapsedMilliseconds, [], 0, 0);
 
-        if (Options.ProofNumberSearch)
-            return RunProofNumbers<T>(shape, table, empty, s, rootMoves, spent, clock, main);
         if (Options.Threads > 1 && Options.SplitBelowRoot)
             return RunSplit<T>(shape, table, empty, s, rootMoves, spent, clock);
         if (Options.Threads > 1 && Options.ShareTree)
@@ -207,6 +221,8 @@ public sealed class WholeBoard
         _liveClock = clock;
         _liveMoves = rootMoves;
         _liveSide = s;
+        // With one thread its line is below the root move shown; with more, it may be below another.
+        if (threads == 1) (_liveLine, _liveLineFromRoot) = (main.SearchLine, false);
 
         void Worker(int t)
         {
@@ -236,6 +252,7 @@ public sealed class WholeBoard
         if (threads == 1) Worker(0);
         else RunThreads(threads, Worker);
         _liveNodes = null;
+        _liveLine = null;
         long nodes = searchers.Sum(x => x.Nodes);
         bool? win = winner >= 0 ? true : searched == rootMoves.Length ? false : null;
         return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, win, winner, work, nodes, searched);
@@ -263,6 +280,7 @@ public sealed class WholeBoard
         _liveMoves = rootMoves;
         _liveSide = s;
         _liveRootCell = () => searchers[0].RootMove;
+        (_liveLine, _liveLineFromRoot) = (searchers[0].SearchLine, true);
         int settled = 0;
         bool result = false;
 
@@ -281,6 +299,7 @@ public sealed class WholeBoard
         RunThreads(threads, Worker);
         _liveNodes = null;
         _liveRootCell = null;
+        _liveLine = null;
         long nodes = searchers.Sum(x => x.Nodes);
         var work = new long[rootMoves.Length];
         if (settled == 0)
@@ -294,32 +313,6 @@ public sealed class WholeBoard
         at = Math.Max(0, at);
         if (!result) work[at] = 1;
         return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, result, result ? at : -1, work, nodes, rootMoves.Length);
-    }
-
-    /// <summary>One thread, proof-number search (<see cref="BoardSearchOptions.ProofNumberSearch"/>); the root move from the table.</summary>
-    private BoardAnswer RunProofNumbers<T>(BoardShape shape, OutcomeTable table, bool[] empty, int s, int[] rootMoves, Func<bool>? spent, Stopwatch clock, BoardSearch<T> main)
-        where T : unmanaged, IBinaryInteger<T>
-    {
-        _liveNodes = () => main.Nodes;
-        _liveClock = clock;
-        _liveMoves = rootMoves;
-        _liveSide = s;
-        _liveRootCell = () => main.RootMove;
-        var proofs = new ProofTable(BitOperations.Log2((ulong)table.Buckets));
-        bool? result = main.ProveWins(s, proofs);
-        _liveNodes = null;
-        _liveRootCell = null;
-        var work = new long[rootMoves.Length];
-        if (result is null)
-            return new BoardAnswer(null, null, main.Nodes, clock.ElapsedMilliseconds, [], rootMoves.Length, 0);
-        var reader = new BoardSearch<T>(shape, table, new StopSignal(), Options, spent);
-        reader.SetPosition(empty);
-        int at = Array.IndexOf(rootMoves, reader.TableMove(s, out _));
-        // A root the bounds decided has no move in the table: the first move that leaves the opponent lost.
-        if (at < 0 && result == true) at = Array.FindIndex(rootMoves, m => Leaves(reader, s, m, lost: true));
-        at = Math.Max(0, at);
-        if (result == false) work[at] = 1;
-        return Answer<T>(shape, table, empty, s, rootMoves, spent, clock, result, result == true ? at : -1, work, main.Nodes + reader.Nodes, rootMoves.Length);
     }
 
     /// <summary>Runs the worker on that many threads at once and waits for them all.</summary>
