@@ -87,8 +87,9 @@ public class WholeBoardTests
     [InlineData("..#./...#/#.../...#")]
     public void ThreadsSharingTheTreeNameAWinningMoveWhereTheBoundsDecideTheRoot(string text)
     {
-        // Found by the random cross-check of the proof-number search (measured, then dropped): the bounds decide the root at once,
-        // so the table holds no move for it and the first move in the order does not win.
+        // Found by the random cross-check of the proof-number search (measured, then dropped): the
+        // bounds decide the root at once, so the table holds no move for it, and the first move in
+        // the order does not win.
         var position = (DomineeringPosition)Rules.Parse(text);
         var answer = new WholeBoard(new BoardSearchOptions { Threads = 2, ShareTree = true, TableLog2 = 12 }).Solve(position, Side.Right);
         Assert.True(answer.Win);
