@@ -33,17 +33,18 @@ public class SolverTests
         var a1 = position.Moves(Side.Left)[0];
         // Scripted figures: the answer counts the work of both tries, and the report that of all three calls.
         Decision[] leftTries = [new Decision(a1, 1_000, 60_000, Exact: false), new Decision(a1, 5, 1, Exact: true, Winning: true)];
+        var rightTry = new Decision(position.Moves(Side.Right)[0], 200, 9_000, Exact: true, Winning: true);
         var player = new Scripted(new()
         {
             [Side.Left] = new(leftTries),
-            [Side.Right] = new([new Decision(position.Moves(Side.Right)[0], 200, 9_000, Exact: true, Winning: true)]),
+            [Side.Right] = new([rightTry]),
         });
         var report = Solver.Solve(position, [Side.Left, Side.Right], player, TimeSpan.FromMinutes(1));
         Assert.Equal([Side.Left, Side.Right, Side.Left], player.Calls.Select(c => c.Side));
         Assert.True(player.Calls[2].Budget <= TimeSpan.FromSeconds(2), "the second try should be brief");
         Assert.Equal(Side.Left, report.LeftFirst!.Winner);
         Assert.Equal(leftTries.Sum(d => d.Nodes), report.LeftFirst.Nodes);
-        Assert.Equal(leftTries.Sum(d => d.Nodes) + 200, report.Nodes);
+        Assert.Equal(leftTries.Sum(d => d.Nodes) + rightTry.Nodes, report.Nodes);
         Assert.True(report.Exact);
         Assert.Equal(Outcome.N, report.Outcome);
     }

@@ -69,11 +69,6 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         }
     }
 
-    /// <summary>The root move (top cell) this instance is searching, or -1; for progress reports.</summary>
-    public int RootMove => Volatile.Read(ref _rootMove);
-
-    private int _rootMove = -1;
-
     // The moves being searched at the first plies, their places among the moves open there and how
     // many are open: read by progress reports from another thread (a torn read only mixes two lines).
     private const int ShownPlies = 4;
@@ -92,6 +87,9 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
         for (int p = 0; p < d; p++) line[p] = (_lineMove[p], _linePlace[p], _lineOpen[p]);
         return line;
     }
+
+    /// <summary>The root move (top cell) this instance is searching, or -1; for progress reports.</summary>
+    public int RootMove => Volatile.Read(ref _lineDepth) > 0 ? _lineMove[0] : -1;
 
     /// <summary>Nodes visited by this instance.</summary>
     public long Nodes { get; private set; }
@@ -425,7 +423,6 @@ public sealed class BoardSearch<T> where T : unmanaged, IBinaryInteger<T>
                     continue;
                 }
                 long before = Nodes;
-                if (ply == 0) Volatile.Write(ref _rootMove, i);
                 if (ply < ShownPlies)
                 {
                     (_lineMove[ply], _linePlace[ply], _lineOpen[ply]) = (i, tried + 1, n);

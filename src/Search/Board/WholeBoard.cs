@@ -38,9 +38,8 @@ public sealed class WholeBoard
     private int[]? _liveMoves;
     private int _liveSide;
     private Func<int>? _liveRootCell;
-    // The line below the root move: a searcher's first plies, and whether its ply 0 is the root itself.
+    // The line below the root move: the plies a searcher is searching, the opponent's reply first.
     private Func<(int Cell, int Place, int Open)[]>? _liveLine;
-    private bool _liveLineFromRoot;
 
     /// <summary>The table of the last shape solved (for saving and resuming).</summary>
     public OutcomeTable? Table => _table;
@@ -149,9 +148,8 @@ public sealed class WholeBoard
             var below = new List<(Move, int, int)>();
             if (_liveLine is { } line)
             {
-                bool fromRoot = _liveLineFromRoot;
                 var plies = line();
-                for (int p = fromRoot ? 1 : 0; p < plies.Length && below.Count < 3; p++)
+                for (int p = 0; p < plies.Length && below.Count < 3; p++)
                 {
                     // Below the root the sides alternate, the opponent's reply first.
                     int side = (below.Count % 2 == 0) ? 1 - _liveSide : _liveSide;
@@ -222,7 +220,7 @@ public sealed class WholeBoard
         _liveMoves = rootMoves;
         _liveSide = s;
         // With one thread its line is below the root move shown; with more, it may be below another.
-        if (threads == 1) (_liveLine, _liveLineFromRoot) = (main.SearchLine, false);
+        if (threads == 1) _liveLine = main.SearchLine;
 
         void Worker(int t)
         {
@@ -280,7 +278,8 @@ public sealed class WholeBoard
         _liveMoves = rootMoves;
         _liveSide = s;
         _liveRootCell = () => searchers[0].RootMove;
-        (_liveLine, _liveLineFromRoot) = (searchers[0].SearchLine, true);
+        // This searcher starts at the root itself: its first ply is the root move.
+        _liveLine = () => searchers[0].SearchLine().Skip(1).ToArray();
         int settled = 0;
         bool result = false;
 
